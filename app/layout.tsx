@@ -1,0 +1,26 @@
+import type { Metadata } from 'next';
+import { NextIntlClientProvider } from 'next-intl';
+import { getLocale, getTranslations } from 'next-intl/server';
+import type { ReactNode } from 'react';
+import { notoSans, notoSyllabics } from './fonts';
+import './globals.css';
+
+export async function generateMetadata(): Promise<Metadata> {
+  const t = await getTranslations('common');
+  return { title: { default: 'Thawline', template: '%s · Thawline' }, description: t('tagline') };
+}
+
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  const locale = await getLocale();
+  const t = await getTranslations('common');
+  return (
+    <html lang={locale} className={`${notoSans.variable} ${notoSyllabics.variable}`}>
+      <body className="min-h-screen font-sans">
+        <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-ice-raised focus:p-2">
+          {t('skipToContent')}
+        </a>
+        <NextIntlClientProvider>{children}</NextIntlClientProvider>
+      </body>
+    </html>
+  );
+}
