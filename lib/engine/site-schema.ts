@@ -88,6 +88,7 @@ const FIRST_YEAR = 1850;
 const LAST_BASELINE_YEAR = 2025;
 
 const finite = () => z.number();
+const year = () => z.int();
 
 /** Exactly 12 monthly values, January first, with a message that names the count. */
 function monthly<T extends z.ZodType<number>>(item: T) {

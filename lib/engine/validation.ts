@@ -29,8 +29,12 @@ export function describeIssue(issue: z.core.$ZodIssue): string {
       if (issue.origin === 'string') return `must have at most ${String(issue.maximum)} characters`;
       return `must be ${op} ${String(issue.maximum)}`;
     }
-    case 'invalid_type':
-      return issue.input === undefined ? 'is required' : `must be ${article(issue.expected)}`;
+    case 'invalid_type': {
+      // zod 4 leaves `input` out of issues unless parsed with reportInput; its default message still
+      // names what it received ("... received undefined" for a missing field).
+      const missing = 'input' in issue ? issue.input === undefined : /received undefined$/.test(issue.message);
+      return missing ? 'is required' : `must be ${article(issue.expected)}`;
+    }
     case 'invalid_value':
       return `must be one of ${issue.values.map((v) => JSON.stringify(v)).join(', ')}`;
     case 'unrecognized_keys':
