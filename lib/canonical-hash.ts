@@ -1,0 +1,12 @@
+/**
+ * SHA-256 of a JSON value in RFC 8785 canonical form (the `canonicalize` package), so equal inputs
+ * hash equally whatever their key order. The engine's input_sha256 and stored profile versions use it.
+ */
+import canonicalize from 'canonicalize';
+import { createHash } from 'node:crypto';
+
+export function canonicalSha256(value: unknown): string {
+  const text = canonicalize(value);
+  if (text === undefined) throw new Error('value cannot be canonicalised as JSON');
+  return createHash('sha256').update(text).digest('hex');
+}
