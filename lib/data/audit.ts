@@ -2,7 +2,7 @@ import 'server-only';
 import { and, desc, eq, inArray, isNull, or } from 'drizzle-orm';
 import { db, type Tx } from '@/db/client';
 import { auditEvents, memberships, users } from '@/db/schema';
-import type { Actor } from './session';
+import { requireActor, ROLES } from './session';
 
 /** Event codes written to the audit log. Dotted, stable: admins filter on them. */
 export const auditEventCodes = [
@@ -71,8 +71,8 @@ export interface AuditEventDto {
  * The organisation's audit log, newest first: its own events and the person-level events (sign-ins)
  * of its current members. Admins only.
  */
-export async function listAuditEvents(actor: Actor, opts: { limit?: number } = {}): Promise<AuditEventDto[]> {
-  if (actor.role !== 'admin') throw new Error('listAuditEvents: admin only (call requireActor first)');
+export async function listAuditEvents(opts: { limit?: number } = {}): Promise<AuditEventDto[]> {
+  const actor = await requireActor(ROLES.admin);
   const limit = Math.min(Math.max(opts.limit ?? 200, 1), 500);
   const memberIds = db.select({ id: memberships.userId }).from(memberships).where(eq(memberships.organisationId, actor.organisationId));
   const rows = await db

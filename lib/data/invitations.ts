@@ -1,4 +1,21 @@
 import 'server-only';
+import { createHash, randomBytes } from 'node:crypto';
+import { headers } from 'next/headers';
+import { and, asc, eq, gt, isNull } from 'drizzle-orm';
+import { db } from '@/db/client';
+import { invitations, memberships, organisations, users, type Role } from '@/db/schema';
+import { env } from '@/lib/env';
+import { sendMail } from '@/lib/mail';
+import { consume } from '@/lib/rate-limit';
+import { recordAuditEvent } from './audit';
+import { notFoundUnlessOwn, requireActor, ROLES } from './session';
+
+/** Invitations expire after 7 days (common practice for account invitations) and work once. */
+export const INVITATION_MAX_AGE_MS = 7 * 24 * 60 * 60 * 1000;
+
+export function hashToken(token: string): string {
+  return createHash('sha256').update(token).digest('hex');
+}
 
 export class InvitationError extends Error {
   constructor(public readonly reason: 'invalid' | 'expired' | 'used' | 'revoked') {
@@ -6,6 +23,145 @@ export class InvitationError extends Error {
   }
 }
 
-export async function acceptInvitationForSignIn(_token: string, _ip: string): Promise<{ id: string; email: string; name: string | null }> {
-  throw new InvitationError('invalid');
+export interface PendingInvitationDto {
+  invitationId: string;
+  email: string;
+  role: Role;
+  expiresAt: string;
+  invitedBy: string | null;
+}
+
+/** Open invitations of the active organisation (not accepted, not revoked, not expired). Admins only. */
+export async function listPendingInvitations(): Promise<PendingInvitationDto[]> {
+  const actor = await requireActor(ROLES.admin);
+  const rows = await db
+    .select({ invitationId: invitations.id, email: invitations.email, role: invitations.role, expiresAt: invitations.expiresAt, invitedBy: users.email })
+    .from(invitations)
+    .leftJoin(users, eq(users.id, invitations.invitedByUserId))
+    .where(and(eq(invitations.organisationId, actor.organisationId), isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date())))
+    .orderBy(asc(invitations.email));
+  return rows.map((r) => ({ ...r, expiresAt: r.expiresAt.toISOString() }));
+}
+
+export type CreateInvitationOutcome = { ok: true } | { ok: false; field?: 'email'; message: string };
+
+/** The origin links in e-mails point to: the request's own (Auth.js trusts the host too), else APP_URL. */
+async function linkOrigin(): Promise<string> {
+  const h = await headers();
+  const host = h.get('x-forwarded-host') ?? h.get('host');
+  if (!host) return env.APP_URL.replace(/\/$/, '');
+  const proto = h.get('x-forwarded-proto') ?? (env.APP_URL.startsWith('https:') ? 'https' : 'http');
+  return `${proto}://${host}`;
+}
+
+/**
+ * Invites an address into the active organisation with a role and e-mails a single-use link.
+ * Admins only. An earlier open invitation for the same address is revoked, so one link is live.
+ */
+export async function createInvitation(input: { email: string; role: Role }): Promise<CreateInvitationOutcome> {
+  const actor = await requireActor(ROLES.admin);
+  if (!(await consume('invitationsSentPerAdmin', actor.userId)).ok) {
+    return { ok: false, message: 'You have sent many invitations in the last hour. Try again later.' };
+  }
+  const [existing] = await db
+    .select({ id: memberships.id })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.organisationId, actor.organisationId), eq(users.email, input.email)))
+    .limit(1);
+  if (existing) return { ok: false, field: 'email', message: 'This person is already a member. Change their role in the list instead.' };
+
+  const token = randomBytes(32).toString('base64url');
+  const expiresAt = new Date(Date.now() + INVITATION_MAX_AGE_MS);
+  await db.transaction(async (tx) => {
+    await tx
+      .update(invitations)
+      .set({ revokedAt: new Date() })
+      .where(and(eq(invitations.organisationId, actor.organisationId), eq(invitations.email, input.email), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)));
+    await tx.insert(invitations).values({ organisationId: actor.organisationId, email: input.email, role: input.role, tokenSha256: hashToken(token), invitedByUserId: actor.userId, expiresAt });
+    await recordAuditEvent({ event: 'invitation.created', organisationId: actor.organisationId, actorUserId: actor.userId, subject: input.email, detail: { role: input.role } }, tx);
+  });
+  const url = `${await linkOrigin()}/invite/${token}`;
+  await sendMail({
+    to: input.email,
+    subject: `You are invited to ${actor.organisationName} on Thawline`,
+    text: [
+      'Hello,',
+      '',
+      `${actor.name ?? actor.email} invites you to join ${actor.organisationName} on Thawline as ${input.role}.`,
+      '',
+      'Open this link to accept and sign in:',
+      url,
+      '',
+      'The link works once and expires in 7 days. If you did not expect this, you can ignore this message.',
+    ].join('\n'),
+  });
+  return { ok: true };
+}
+
+/** Revokes an open invitation of the active organisation. Admins only; another organisation's → 404. */
+export async function revokeInvitation(input: { invitationId: string }): Promise<void> {
+  const actor = await requireActor(ROLES.admin);
+  const [row] = await db.select({ id: invitations.id, organisationId: invitations.organisationId, email: invitations.email, acceptedAt: invitations.acceptedAt }).from(invitations).where(eq(invitations.id, input.invitationId)).limit(1);
+  notFoundUnlessOwn(row?.organisationId, actor);
+  if (row!.acceptedAt) return;
+  await db.update(invitations).set({ revokedAt: new Date() }).where(eq(invitations.id, row!.id));
+  await recordAuditEvent({ event: 'invitation.revoked', organisationId: actor.organisationId, actorUserId: actor.userId, subject: row!.email });
+}
+
+export type InvitationStatus = 'valid' | 'expired' | 'used' | 'revoked' | 'invalid';
+
+export interface InvitationPreview {
+  status: InvitationStatus;
+  organisationName?: string;
+  role?: Role;
+  email?: string;
+}
+
+/**
+ * What the invitation page may show for a token. Public by design: the token itself is the secret,
+ * so a valid one reveals the organisation and the invited address; anything else reveals nothing.
+ */
+export async function previewInvitation(token: string): Promise<InvitationPreview> {
+  const [row] = await db
+    .select({ email: invitations.email, role: invitations.role, expiresAt: invitations.expiresAt, acceptedAt: invitations.acceptedAt, revokedAt: invitations.revokedAt, organisationName: organisations.name })
+    .from(invitations)
+    .innerJoin(organisations, eq(organisations.id, invitations.organisationId))
+    .where(eq(invitations.tokenSha256, hashToken(token)))
+    .limit(1);
+  if (!row) return { status: 'invalid' };
+  if (row.acceptedAt) return { status: 'used' };
+  if (row.revokedAt) return { status: 'revoked' };
+  if (row.expiresAt.getTime() <= Date.now()) return { status: 'expired' };
+  return { status: 'valid', organisationName: row.organisationName, role: row.role, email: row.email };
+}
+
+/**
+ * Accepts an invitation and returns the person to sign in (the Auth.js "invitation" provider calls
+ * this). In one transaction with the invitation row locked: checks it is open, creates the user if the
+ * address is new (the mailed token proves the address), adds the membership, marks it used.
+ */
+export async function acceptInvitationForSignIn(token: string, ip: string): Promise<{ id: string; email: string; name: string | null }> {
+  return db.transaction(async (tx) => {
+    const [inv] = await tx.select().from(invitations).where(eq(invitations.tokenSha256, hashToken(token))).for('update');
+    if (!inv) throw new InvitationError('invalid');
+    if (inv.acceptedAt) throw new InvitationError('used');
+    if (inv.revokedAt) throw new InvitationError('revoked');
+    if (inv.expiresAt.getTime() <= Date.now()) throw new InvitationError('expired');
+
+    let [user] = await tx.select({ id: users.id, email: users.email, name: users.name, emailVerified: users.emailVerified }).from(users).where(eq(users.email, inv.email)).limit(1);
+    if (!user) {
+      const id = crypto.randomUUID();
+      await tx.insert(users).values({ id, email: inv.email, emailVerified: new Date() });
+      user = { id, email: inv.email, name: null, emailVerified: new Date() };
+    } else if (!user.emailVerified) {
+      await tx.update(users).set({ emailVerified: new Date() }).where(eq(users.id, user.id));
+    }
+    const [member] = await tx.select({ id: memberships.id }).from(memberships).where(and(eq(memberships.organisationId, inv.organisationId), eq(memberships.userId, user.id))).limit(1);
+    // Someone who is already a member keeps the role an admin gave them since.
+    if (!member) await tx.insert(memberships).values({ organisationId: inv.organisationId, userId: user.id, role: inv.role });
+    await tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, inv.id));
+    await recordAuditEvent({ event: 'invitation.accepted', organisationId: inv.organisationId, actorUserId: user.id, subject: inv.email, detail: { role: inv.role }, ip }, tx);
+    return { id: user.id, email: user.email, name: user.name };
+  });
 }
