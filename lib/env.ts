@@ -30,6 +30,8 @@ const envSchema = z.object({
   /** Shows the development inbox at /dev/inbox. Never set in production. */
   DEV_INBOX: flag.default(false),
   AUTH_SECRET: z.string().min(32, 'must be at least 32 characters').default('development-only-secret-change-me-0123456789'),
+  /** Build output folder; the test command builds into its own so a running demo keeps working. */
+  NEXT_DIST_DIR: z.string().regex(/^\.next[\w-]*$/, 'must be .next or .next-<name>').default('.next'),
   /** Auth.js must trust the Host header behind `next start` on localhost. */
   AUTH_TRUST_HOST: flag.default(true),
 });
