@@ -47,6 +47,7 @@ describe('siteSchema: every field error is named', () => {
     ['baseline year not an integer', (s) => (s.climate.baseline_period = [1990.5, 2020]), 'climate.baseline_period[0]: must be an integer'],
     ['baseline before 1850', (s) => (s.climate.baseline_period = [1840, 1870]), 'climate.baseline_period[0]: must be >= 1850'],
     ['regional factors 13 values', (s) => (s.climate.regional_factors = new Array(13).fill(1.5)), 'climate.regional_factors: needs 12 monthly values, got 13'],
+    ['local projection point without a change', (s) => (s.climate.local_projection = { baseline_period: [1995, 2014], series: [{ year: 2050 }] }), 'climate.local_projection.series[0]: give exactly one of annual_change_c or monthly_change_c'],
     ['snow depths 11', (s) => s.snow.monthly_depth_m.pop(), 'snow.monthly_depth_m: needs 12 monthly values, got 11'],
     ['snow depth negative', (s) => (s.snow.monthly_depth_m[0] = -0.1), 'snow.monthly_depth_m[0]: must be >= 0'],
     ['snow density too low', (s) => (s.snow.density_kg_m3 = 10), 'snow.density_kg_m3: must be >= 50'],

@@ -18,6 +18,7 @@
  * doi:10.1002/ppp.518).
  */
 import { z } from 'zod';
+import { localProjectionSchema } from './local-climate';
 
 /** Minimum column depth the site model runs with [m]; layers are extended to it (see above). */
 export const MIN_COLUMN_DEPTH_M = 50;
@@ -113,11 +114,8 @@ const baselinePeriod = z
     }
   });
 
-/**
- * A local projection series is defined by the climate module (lib/engine/local-climate.ts).
- * Until its schema is wired in, the field is accepted as an opaque value and not used.
- */
-const localProjection = z.unknown().optional();
+/** An uploaded local projection series: the climate module's schema (lib/engine/local-climate.ts). */
+const localProjection = localProjectionSchema.optional();
 
 const climateSchema = z.strictObject({
   monthly_air_temperature_c: monthlyAirTemperature,
