@@ -14,7 +14,8 @@
  *
  * Construction: the emulator starts at equilibrium in 1750 (forcing 0), runs the historical forcing
  * (volcanic smoothed out) and the scenario; its annual surface temperature minus its 1850–1900 mean
- * is the warming. See data/ssp-forcing.ts, two-layer-ebm.ts, permafrost-carbon.ts for sources.
+ * is the warming. With the permafrost-carbon feedback, thaw counts warming above that 1850–1900
+ * mean and acts from 1901 (the pool is taken as in balance with the 1850–1900 climate). See data/ssp-forcing.ts, two-layer-ebm.ts, permafrost-carbon.ts for sources.
  * References: [1] IPCC AR6 WG1 SPM, Table SPM.1 (the checks), doi:10.1017/9781009157896.001.
  */
 import { co2ConcentrationPpm, FORCING_FIRST_YEAR, scenarioErfWm2 } from './data/ssp-forcing';
@@ -52,8 +53,34 @@ export interface GlobalWarmingDetails extends GlobalWarmingSeries {
 }
 
 const cache = new Map<string, GlobalWarmingDetails>();
+const rawCache = new Map<string, Float64Array>();
+
+/** The emulator's annual surface temperature [K above 1750], 1750–2100, without feedback (memoised). */
+function globalWarmingRaw(scenario: ScenarioId): Float64Array {
+  let hit = rawCache.get(scenario);
+  if (!hit) {
+    const n = GLOBAL_WARMING_LAST_YEAR - FORCING_FIRST_YEAR + 1;
+    hit = new Float64Array(n);
+    const ebm: TwoLayerState = { surfaceK: 0, deepK: 0 };
+    for (let i = 0; i < n; i++) hit[i] = stepTwoLayerYear(ebm, CALIBRATED_TWO_LAYER, scenarioErfWm2(scenario, FORCING_FIRST_YEAR + i));
+    rawCache.set(scenario, hit);
+  }
+  return hit;
+}
+
+/** Mean of the emulator's surface temperature over 1850–1900 [K above 1750], without feedback. */
+function preindustrialMeanK(temp: Float64Array): number {
+  const i0 = PREINDUSTRIAL_PERIOD[0] - FORCING_FIRST_YEAR;
+  const i1 = PREINDUSTRIAL_PERIOD[1] - FORCING_FIRST_YEAR;
+  let base = 0;
+  for (let i = i0; i <= i1; i++) base += temp[i];
+  return base / (i1 - i0 + 1);
+}
 
 function compute(scenario: ScenarioId, feedback: boolean): GlobalWarmingDetails {
+  // The permafrost pool is taken as in balance with the 1850–1900 climate: thaw counts warming above
+  // the 1850–1900 mean, and the feedback acts from 1901, so both runs share the same reference.
+  const feedbackBaseK = feedback ? preindustrialMeanK(globalWarmingRaw(scenario)) : 0;
   const nAll = GLOBAL_WARMING_LAST_YEAR - FORCING_FIRST_YEAR + 1;
   const temp = new Float64Array(nAll);
   const forcing = new Float64Array(nAll);
@@ -67,19 +94,15 @@ function compute(scenario: ScenarioId, feedback: boolean): GlobalWarmingDetails 
     const f = scenarioErfWm2(scenario, year) + extraForcing;
     forcing[i] = f;
     temp[i] = stepTwoLayerYear(ebm, CALIBRATED_TWO_LAYER, f);
-    if (feedback) {
+    if (feedback && year > PREINDUSTRIAL_PERIOD[1]) {
       // Explicit coupling with a one-year lag: this year's warming sets next year's extra forcing.
-      stepPermafrostCarbonYear(pf, temp[i]);
+      stepPermafrostCarbonYear(pf, temp[i] - feedbackBaseK);
       extraCo2[i] = permafrostAirborneCo2Ppm(pf);
       release[i] = pf.releasedPgC;
       extraForcing = permafrostCo2ForcingWm2(extraCo2[i], co2ConcentrationPpm(scenario, year));
     }
   }
-  const i0 = PREINDUSTRIAL_PERIOD[0] - FORCING_FIRST_YEAR;
-  const i1 = PREINDUSTRIAL_PERIOD[1] - FORCING_FIRST_YEAR;
-  let base = 0;
-  for (let i = i0; i <= i1; i++) base += temp[i];
-  base /= i1 - i0 + 1;
+  const base = preindustrialMeanK(temp);
   const years: number[] = [];
   const warming: number[] = [];
   const forcingOut: number[] = [];

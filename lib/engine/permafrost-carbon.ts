@@ -25,7 +25,7 @@
  * assessed permafrost CO2 feedback, 18 (5–95 %: 3.1–41) PgC per °C (AR6 WG1 ch. 5, 5.4.3.2 and
  * Table 5.7 [2]; from memory).
  *
- * References:
+ * References (DOIs from memory except those given in the engine issue):
  * [1] G. Hugelius et al., "Estimated stocks of circumpolar permafrost carbon with quantified uncertainty
  *     ranges and identified data gaps," Biogeosciences 11, 6573–6593, 2014, doi:10.5194/bg-11-6573-2014.
  * [2] J. G. Canadell et al., "Global carbon and other biogeochemical cycles and feedbacks," IPCC AR6

@@ -27,7 +27,7 @@
  * The engine's sites lie at or north of 45° N; between 45° and about 55° N these boxes are the
  * nearest northern regions, a coarser approximation (the source string says so).
  *
- * References:
+ * References (DOIs from memory except those given in the engine issue):
  * [1] J. M. Gutiérrez et al., "Atlas," in IPCC AR6 WG1, 2021, doi:10.1017/9781009157896.021;
  *     Interactive Atlas, https://interactive-atlas.ipcc.ch.
  * [2] M. Iturbide et al., "An update of IPCC climate reference regions for subcontinental analysis of

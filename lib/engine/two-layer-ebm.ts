@@ -22,7 +22,7 @@
  * the mean over the year's sub-steps. Validity: global means, forcing within a few times F2x, decades
  * to centuries; not for abrupt regional or state-dependent feedbacks.
  *
- * References:
+ * References (DOIs from memory except those given in the engine issue):
  * [1] I. M. Held et al., "Probing the fast and slow components of global warming by returning abruptly
  *     to preindustrial forcing," J. Climate 23, 2418–2427, 2010, doi:10.1175/2009JCLI3466.1.
  * [2] O. Geoffroy et al., "Transient climate response in a two-layer energy-balance model. Part II:

@@ -19,7 +19,7 @@
  * 4. SSP1-1.9 has no ERF anchor above: it is reconstructed as SSP1-2.6 less the CO2 forcing of
  *    the gap between the two scenarios' CO2 concentrations, the gap opening linearly from 0 in 2020
  *    to its 2100 size (446 − 393 ppm; 446 read [3], 393 from memory [3]); non-CO2 differences are
- *    neglected. In 2100 this gives 2.38 W m-2; as a cross-check, the scenario's nominal 1.9 W m-2
+ *    neglected. In 2100 this gives 2.383 W m-2; as a cross-check, the scenario's nominal 1.9 W m-2
  *    times the mean ratio of AR6 ERF to nominal label of the other four (3.10/2.6, 5.40/4.5,
  *    8.18/7.0, 10.0/8.5 → 1.185) gives 2.25 W m-2.
  * 5. CO2 concentrations (only used for the slope of the logarithmic CO2 law in the permafrost-carbon
@@ -27,7 +27,7 @@
  *    [4]), 2100 per scenario from Meinshausen et al. 2020 [3] (446 / 603 / 867 / 1135 ppm read,
  *    SSP1-1.9 393 from memory), 2050 values from memory (approximate), linear between anchors.
  *
- * References:
+ * References (DOIs from memory except those given in the engine issue):
  * [1] P. Forster et al., "The Earth's energy budget, climate feedbacks, and climate sensitivity,"
  *     in IPCC AR6 WG1, Cambridge Univ. Press, 2021, ch. 7, doi:10.1017/9781009157896.009.
  * [2] IPCC AR6 WG1 Annex III, "Tables of historical and projected well-mixed greenhouse gas mixing
