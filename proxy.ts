@@ -19,7 +19,7 @@ export function proxy(request: NextRequest) {
   const hasCookie = SESSION_COOKIES.some((name) => request.cookies.has(name) || request.cookies.getAll().some((c) => c.name.startsWith(`${name}.`)));
   // Only plain page loads are redirected here; server actions (POST with Next-Action) get their answer
   // from the data layer, so they receive the framework's redirect signal rather than a bare 307.
-  if (needsSession && !hasCookie && request.method === 'GET') {
+  if (needsSession && !hasCookie && (request.method === 'GET' || request.method === 'HEAD')) {
     const url = request.nextUrl.clone();
     url.pathname = '/sign-in';
     url.search = `?returnTo=${encodeURIComponent(path)}`;
