@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { airFreezingIndexCDays, airIndicesForYear, airThawingIndexCDays, freezingIndexForWinterCDays, summarizeAirIndices } from './air-indices';
+import {
+  airFreezingIndexCDays,
+  airIndicesForYear,
+  airThawingIndexCDays,
+  annualAirIndicesFromMonthly,
+  freezingIndexForWinterCDays,
+  summarizeAirIndices,
+} from './air-indices';
 
 describe('air thawing and freezing indices', () => {
   it('sums degree-days above / below 0 °C (definition, UFC 3-130-06; common practice)', () => {
@@ -61,4 +68,20 @@ describe('air thawing and freezing indices', () => {
   it('refuses a window outside the series', () => {
     expect(() => summarizeAirIndices({ years: [2000, 2001], thawingIndexCDays: [1, 2], freezingIndexCDays: [1, 2] }, [1999, 2001])).toThrow();
   });
+
+  it('from monthly means: months entirely above or below 0 °C contribute exactly their mean × days (mean preservation)', () => {
+    // Months far from 0 °C: the daily curve stays on one side, so the index is Σ mean × days exactly.
+    const m = [-30, -28, -22, -12, -5, 8, 14, 10, 4, -6, -18, -26];
+    const r = annualAirIndicesFromMonthly({ years: [2000, 2001, 2002], monthlyC: [m, m, m] });
+    const days = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+    const ti = m.reduce((s, v, i) => s + (v > 0 ? v * days[i] : 0), 0);
+    const fi = -m.reduce((s, v, i) => s + (v < 0 ? v * days[i] : 0), 0);
+    // The May/June and September/October crossings smear a little across 0 °C: both indices gain
+    // the same amount (TI − FI equals Σ mean × days exactly), so compare the difference exactly.
+    expect(r.thawingIndexCDays[1] - r.freezingIndexCDays[1]).toBeCloseTo(ti - fi, 8);
+    expect(r.thawingIndexCDays[1]).toBeGreaterThanOrEqual(ti - 1e-9);
+    expect(r.thawingIndexCDays[1] - ti).toBeLessThan(0.05 * ti);
+    expect(r.winterFreezingIndexCDays[1]).toBeCloseTo(r.freezingIndexCDays[1], 8);
+  });
 });
+

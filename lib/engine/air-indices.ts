@@ -23,6 +23,7 @@
  * [2] O. B. Andersland and B. Ladanyi, Frozen Ground Engineering, 2nd ed., Wiley, 2004, ch. 3.
  */
 import { DAYS_PER_YEAR } from './constants';
+import { meanPreservingDailyFromMonthly } from './monthly-to-daily';
 import { EngineInputError } from './validation';
 
 /** Index of 1 July in the 365-day model year (0-based). */
@@ -132,4 +133,37 @@ export function summarizeAirIndices(
     coldestFreezingIndexCDays: Math.max(...freeze),
     designFreezingIndexCDays: meanOfLargest(freeze, 3),
   };
+}
+
+/**
+ * Annual air indices [°C·d] of a monthly series, through the mean-preserving daily interpolation
+ * (monthly-to-daily.ts), each year joined to its neighbours.
+ * @param series `years` and `monthlyC` (12 monthly means [°C] per year, January first), as returned
+ *   by `localMonthlyAirTemperatures`.
+ * @returns Per year: `thawingIndexCDays` and `freezingIndexCDays` (calendar year), and
+ *   `winterFreezingIndexCDays` (1 July of the year before to 30 June; the first year's uses its own
+ *   second half-year as the previous one).
+ */
+export function annualAirIndicesFromMonthly(series: { years: ArrayLike<number>; monthlyC: ReadonlyArray<ArrayLike<number>> }): {
+  years: number[];
+  thawingIndexCDays: Float64Array;
+  freezingIndexCDays: Float64Array;
+  winterFreezingIndexCDays: Float64Array;
+} {
+  const n = series.monthlyC.length;
+  const thaw = new Float64Array(n);
+  const freeze = new Float64Array(n);
+  const winter = new Float64Array(n);
+  let prevDaily = new Float64Array(DAYS_PER_YEAR);
+  let daily = new Float64Array(DAYS_PER_YEAR);
+  for (let i = 0; i < n; i++) {
+    meanPreservingDailyFromMonthly(series.monthlyC[i], i > 0 ? series.monthlyC[i - 1] : null, i + 1 < n ? series.monthlyC[i + 1] : null, daily);
+    thaw[i] = airThawingIndexCDays(daily);
+    freeze[i] = airFreezingIndexCDays(daily);
+    winter[i] = freezingIndexForWinterCDays(i > 0 ? prevDaily : daily, daily);
+    const t = prevDaily;
+    prevDaily = daily;
+    daily = t;
+  }
+  return { years: Array.from(series.years), thawingIndexCDays: thaw, freezingIndexCDays: freeze, winterFreezingIndexCDays: winter };
 }
