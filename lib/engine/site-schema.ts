@@ -293,7 +293,8 @@ export function givenColumnDepthM(site: Pick<Site, 'layers'>): number {
 /**
  * A complete, illustrative site: an ice-rich silt terrace with a peat cover in the western Canadian
  * Arctic. The climate normals are rounded, illustrative values of the kind found near 68° N
- * (from memory, not a station record); they are for documentation and tests, not for decisions.
+ * (from memory, not a station record); the snow is wind-packed tundra snow (350 kg m-3, at most
+ * 0.35 m); they are for documentation and tests, not for decisions.
  */
 export const exampleSite: SiteInput = {
   name: 'Example terrace (illustrative)',
@@ -303,8 +304,8 @@ export const exampleSite: SiteInput = {
     baseline_period: [1991, 2020],
   },
   snow: {
-    monthly_depth_m: [0.45, 0.5, 0.55, 0.5, 0.15, 0, 0, 0, 0.02, 0.15, 0.3, 0.4],
-    density_kg_m3: 250,
+    monthly_depth_m: [0.3, 0.33, 0.35, 0.35, 0.1, 0, 0, 0, 0.02, 0.1, 0.2, 0.25],
+    density_kg_m3: 350,
     scenario_case: 'baseline',
   },
   surface: { cover: 'tundra' },
@@ -357,7 +358,7 @@ export const exampleSite: SiteInput = {
     },
   ],
   observed: {
-    active_layer_thickness_m: 0.9,
+    active_layer_thickness_m: 0.6,
   },
   checklist: {
     ponding: 'absent',

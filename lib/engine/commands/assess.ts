@@ -1,10 +1,14 @@
-import { z } from 'zod';
+/**
+ * The `assess` command of the engine contract: a community ground profile under scenarios and
+ * planning horizons. Input schema and run: lib/engine/assess.ts.
+ */
+import { assessInputSchema, runAssessment } from '../assess';
 import type { EngineCommand } from './types';
 
-// Placeholder until the assess command lands.
-export const assessCommand: EngineCommand = {
-  schema: z.object({}),
-  run() {
-    throw new Error('the assess command is not implemented yet');
+export const assessCommand: EngineCommand<typeof assessInputSchema> = {
+  schema: assessInputSchema,
+  async run(input) {
+    const { output } = await runAssessment(input);
+    return output;
   },
 };
