@@ -7,6 +7,15 @@ import { DemoNotice } from '@/components/community/demo-badge';
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 const fmt = (v: number, digits = 1) => v.toLocaleString('en', { minimumFractionDigits: digits, maximumFractionDigits: digits });
 
+function layerDepths<T extends { thickness_m: number }>(layers: T[]): (T & { top: number; bottom: number })[] {
+  const out: (T & { top: number; bottom: number })[] = [];
+  for (const l of layers) {
+    const top = out.length ? out[out.length - 1]!.bottom : 0;
+    out.push({ ...l, top, bottom: top + l.thickness_m });
+  }
+  return out;
+}
+
 export default async function GroundProfilePage({ params }: { params: Promise<{ slug: string; profile: string }> }) {
   const { slug, profile } = await params;
   const t = await getTranslations('profile');
@@ -16,12 +25,7 @@ export default async function GroundProfilePage({ params }: { params: Promise<{ 
   const temps = site.climate.monthly_air_temperature_c;
   const maat = temps.reduce((a, b) => a + b, 0) / 12;
   const density = site.snow.density_kg_m3;
-  let top = 0;
-  const layers = site.layers.map((l) => {
-    const row = { ...l, top, bottom: top + l.thickness_m };
-    top = row.bottom;
-    return row;
-  });
+  const layers = layerDepths(site.layers);
   const checklist = Object.entries(site.checklist ?? {});
 
   return (
