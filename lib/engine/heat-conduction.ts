@@ -27,9 +27,12 @@
  *   change: frozen branch, a flat segment of width L at the freezing point, thawed branch). Each step
  *   solves the nonlinear system by Newton's method on H: T is linearised within its current segment,
  *   the tridiagonal Jacobian is solved by the Thomas algorithm, and iterations stop when no cell
- *   changes segment (then the linearisation is exact and the step's residual is zero to round-off).
- *   Conductivity is lagged by one iteration. Fluxes are conservative, so the heat that crosses the
- *   boundaries equals the change of stored enthalpy to round-off in every iteration.
+ *   changes segment (then the linearisation is exact).
+ *   Conductivity is semi-implicit: evaluated from the state at the start of each step and held
+ *   through its iterations (k(H) is continuous, varying with the thawed fraction inside the phase
+ *   change; lagging it within the step is a first-order-in-time choice that keeps the iterations
+ *   few and avoids a slowly oscillating fixed point in thin, partly thawed top cells). Fluxes are conservative, so the
+ *   heat that crosses the boundaries equals the change of stored enthalpy to round-off.
  * - Snow: up to `SNOW_CELLS` equal cells of the given thickness on top of the soil, sensible heat only,
  *   solved in the same tridiagonal system; their temperatures carry over between steps and are capped
  *   at 0 °C (melting). When snow appears, its cells start on the line between the surface and the
@@ -144,6 +147,7 @@ export interface SnowCover {
   /** Volumetric heat capacity [J m-3 K-1] (e.g. snowHeatCapacity). */
   heatCapacityJm3K: number;
 }
+
 
 /** Number of snow cells (equal thickness) solved on top of the soil. */
 export const SNOW_CELLS = 3;
@@ -592,32 +596,37 @@ export class HeatConductionColumn {
           changed++;
           seg[p] = sg;
         }
-        let kn: number;
         if (sg === 0) {
           const sl = invCb[c];
           s[p] = sl;
           t[p] = bpT[o] + (hv - bpH[o]) * sl;
-          kn = bpK[o];
         } else if (sg === mm) {
           const sl = invCa[c];
           s[p] = sl;
           t[p] = bpT[o + mm - 1] + (hv - bpH[o + mm - 1]) * sl;
-          kn = bpK[o + mm - 1];
         } else {
-          const dd = hv - bpH[o + sg - 1];
           const sl = slT[o + sg];
           s[p] = sl;
-          t[p] = bpT[o + sg - 1] + dd * sl;
-          kn = bpK[o + sg - 1] + dd * slK[o + sg];
-        }
-        if (kn !== k[p]) {
-          k[p] = kn;
-          kDirty[p] = 1;
+          t[p] = bpT[o + sg - 1] + (hv - bpH[o + sg - 1]) * sl;
         }
       }
+      // Converged when no cell changed segment (T(H) is then linear, so the solve was exact), or
+      // when the update is negligible.
       if (changed === 0 || maxDh < 1e-3) {
         converged = true;
         break;
+      }
+    }
+    // conductivities for the next step (semi-implicit: held through each step's iterations)
+    for (let p = SNOW_CELLS; p <= last; p++) {
+      const c = p - SNOW_CELLS;
+      const o = cellOff[c];
+      const mm = cellCnt[c];
+      const sg = seg[p];
+      const kn = sg === 0 ? bpK[o] : sg === mm ? bpK[o + mm - 1] : bpK[o + sg - 1] + (h[p] - bpH[o + sg - 1]) * slK[o + sg];
+      if (kn !== k[p]) {
+        k[p] = kn;
+        kDirty[p] = 1;
       }
     }
     this.statIter += iter;
