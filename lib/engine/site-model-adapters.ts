@@ -9,6 +9,7 @@
 import type { PhaseChangeMaterial } from './heat-conduction';
 import { freezingCurveMaterial, soilThermalProperties } from './soil-properties';
 import { snowConductivitySturm1997, snowHeatCapacity, SNOW_DENSITY_MAX_KG_M3, SNOW_DENSITY_MIN_KG_M3 } from './snow';
+import { nFactors } from './n-factors';
 import type { SiteLayer, SurfaceCover } from './site-schema';
 
 /**
@@ -40,27 +41,6 @@ export function snowPropertiesAdapter(densityKgM3: number): { conductivityWmK: n
   return { conductivityWmK: snowConductivitySturm1997(rho), heatCapacityJm3K: snowHeatCapacity(rho) };
 }
 
-/**
- * Provisional n-factor table until n-factors.ts lands (then this is replaced by its values).
- * Values from memory of UFC 3-130-04 (formerly TM 5-852-4) tables and Klene et al. 2001
- * (doi:10.2307/1552214); common practice, not read from the sources here.
- */
-function nFactorsForCover(cover: SurfaceCover): { thaw: number; freeze: number; thawRange: [number, number]; freezeRange: [number, number]; snowCleared: boolean; source: string } {
-  const table: Record<SurfaceCover, [number, number, number, number, number, number, boolean]> = {
-    tundra: [0.9, 0.6, 1.2, 0.5, 0.3, 0.9, false],
-    shrub_tundra: [0.8, 0.6, 1.1, 0.45, 0.25, 0.8, false],
-    forest: [0.5, 0.3, 0.8, 0.35, 0.2, 0.6, false],
-    peat: [0.7, 0.5, 1.0, 0.5, 0.3, 0.9, false],
-    gravel_pad: [1.5, 1.2, 2.0, 0.9, 0.6, 1.0, false],
-    gravel_road: [1.6, 1.3, 2.0, 0.9, 0.7, 1.0, true],
-    paved_road: [1.9, 1.6, 2.3, 0.95, 0.8, 1.0, true],
-    airstrip: [1.8, 1.4, 2.2, 0.95, 0.8, 1.0, true],
-    bare_soil: [1.3, 1.0, 1.6, 0.9, 0.7, 1.0, false],
-  };
-  const [thaw, t0, t1, freeze, f0, f1, snowCleared] = table[cover];
-  return { thaw, freeze, thawRange: [t0, t1], freezeRange: [f0, f1], snowCleared, source: 'provisional table (UFC 3-130-04; Klene et al. 2001; from memory)' };
-}
-
 /** n-factors of a surface as the site model uses them. */
 export interface SurfaceNFactors {
   nThaw: number;
@@ -81,14 +61,14 @@ export interface SurfaceNFactors {
  * @param cover Surface cover. @param thawOverride Site n_factor_thaw [-]. @param freezeOverride Site n_factor_freeze [-].
  */
 export function surfaceNFactorsAdapter(cover: SurfaceCover, thawOverride?: number, freezeOverride?: number): SurfaceNFactors {
-  const t = nFactorsForCover(cover);
-  const nThaw = thawOverride ?? t.thaw;
-  const nFreeze = freezeOverride ?? t.freeze;
+  const t = nFactors(cover);
+  const nThaw = thawOverride ?? t.thawing;
+  const nFreeze = freezeOverride ?? t.freezing;
   return {
     nThaw,
     nFreeze,
-    nThawRange: [Math.min(t.thawRange[0], nThaw), Math.max(t.thawRange[1], nThaw)],
-    nFreezeRange: [Math.min(t.freezeRange[0], nFreeze), Math.max(t.freezeRange[1], nFreeze)],
+    nThawRange: [Math.min(t.thawingRange[0], nThaw), Math.max(t.thawingRange[1], nThaw)],
+    nFreezeRange: [Math.min(t.freezingRange[0], nFreeze), Math.max(t.freezingRange[1], nFreeze)],
     snowCleared: t.snowCleared,
     source: t.source,
     overridden: thawOverride !== undefined || freezeOverride !== undefined,

@@ -19,30 +19,17 @@
  */
 import { z } from 'zod';
 import { localProjectionSchema } from './local-climate';
+import { SURFACE_COVERS } from './n-factors';
+import { TEXTURES, type Texture } from './soil-properties';
 
 /** Minimum column depth the site model runs with [m]; layers are extended to it (see above). */
 export const MIN_COLUMN_DEPTH_M = 50;
 
-/** Soil and rock textures the soil-property models know (Johansen 1975 for minerals, Farouki 1981 for peat). */
-export const TEXTURES = ['gravel', 'sand', 'silt', 'clay', 'peat', 'till', 'bedrock'] as const;
-export type Texture = (typeof TEXTURES)[number];
+/** Soil and rock textures the soil-property models know (the one list, soil-properties.ts). */
+export { TEXTURES, type Texture } from './soil-properties';
 
-/**
- * Surface cover types. Defined here until lib/engine/n-factors.ts exports its own list; the two
- * must stay identical (a test checks it once that module exists).
- */
-export const SURFACE_COVERS = [
-  'tundra',
-  'shrub_tundra',
-  'forest',
-  'peat',
-  'gravel_pad',
-  'gravel_road',
-  'paved_road',
-  'airstrip',
-  'bare_soil',
-] as const;
-export type SurfaceCover = (typeof SURFACE_COVERS)[number];
+/** Surface cover types (the one list, n-factors.ts). */
+export { SURFACE_COVERS, type SurfaceCover } from './n-factors';
 
 /**
  * Visual ice classes of frozen soil, ASTM D4083 ("Standard Practice for Description of Frozen Soils
