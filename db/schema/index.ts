@@ -9,3 +9,4 @@ export * from './audit-events';
 export * from './communities';
 export * from './ground-profiles';
 export * from './ground-profile-versions';
+export * from './outlooks';
