@@ -27,7 +27,8 @@
  *   and zero through any month whose mean depth is 0.
  *
  * Year diagnostics (per 365-day calendar year, extremes over every solver step):
- * seasonal thaw = largest thaw depth from the surface; permafrost table = top of the ground that
+ * seasonal thaw = largest thaw depth from the surface, bounded by the depth the winter froze to
+ * (once a talik forms, the seasonal layer above it); permafrost table = top of the ground that
  * stayed frozen all year (null: no permafrost in the column); talik = a layer ≥ 0.2 m that stayed
  * thawed through this year and the one before, below the seasonal freezing depth, with permafrost
  * below (heat-conduction.ts `detectTalik` over the two-year extremes); mean/min/max temperature at
@@ -238,8 +239,14 @@ export interface YearRecord {
   airMeanC: number;
   thawingIndexCDays: number;
   freezingIndexCDays: number;
-  /** Largest thaw depth from the surface [m]. */
+  /**
+   * Seasonal thaw [m]: the largest thaw depth from the surface, bounded by the depth the winter
+   * froze to (so that, once a talik forms, it is the seasonally frozen and thawed layer above it,
+   * shallower than the permafrost table, as the contract describes).
+   */
   seasonalThawM: number;
+  /** Largest thaw depth from the surface [m] (the contract's thaw depth; reaches through a talik). */
+  thawFromSurfaceM: number;
   /** Top of the ground frozen all year [m]; null if the column holds no permafrost. */
   permafrostTableM: number | null;
   /** Deepest thawed depth of the year [m] (the permafrost table, or the column depth). */
@@ -504,7 +511,8 @@ export function runYears(
       airMeanC: airSum / DAYS_PER_YEAR,
       thawingIndexCDays: airThawingIndexCDays(air),
       freezingIndexCDays: freezing,
-      seasonalThawM: st.maxThawDepthM,
+      seasonalThawM: Math.min(st.maxThawDepthM, seasonalFreezingDepthM(column, p, st.minEnthalpyJm3)),
+      thawFromSurfaceM: st.maxThawDepthM,
       permafrostTableM: table,
       deepestThawM: table ?? p.grid.depthM,
       talik: talikTop !== null,
@@ -520,6 +528,21 @@ export function runYears(
   }
   carry.state = column.getState();
   return records;
+}
+
+/**
+ * Depth the ground froze to from the surface during a period [m]: the top of the shallowest cell
+ * whose minimum temperature stayed above its freezing point (never froze); Infinity if every cell
+ * froze at some time (the seasonal frost reached the permafrost, or the column is all frozen).
+ * @param column Solver column (material curves). @param p Prepared site (freezing points).
+ * @param minEnthalpyJm3 Per-cell minimum enthalpy of the period [J m-3].
+ */
+export function seasonalFreezingDepthM(column: HeatConductionColumn, p: PreparedSite, minEnthalpyJm3: Float64Array): number {
+  const g = p.grid;
+  for (let c = 0; c < g.cellCount; c++) {
+    if (column.temperatureFromEnthalpy(c, minEnthalpyJm3[c]) > p.freezingPointsC[g.layerIndex[c]]) return g.faceDepthM[c];
+  }
+  return Infinity;
 }
 
 /** Observed profile of the site as per-cell temperatures at its date, or null. */
@@ -737,14 +760,21 @@ export function baselineRecords(p: PreparedSite, h: Pick<SiteHistory, 'records' 
   return [...h.records, ...h.baselineExtension].filter((r) => r.year >= b0 && r.year <= b1);
 }
 
+/** Shallowest depth searched for the depth of zero annual amplitude [m] (see below). */
+export const ZAA_MIN_DEPTH_M = 10;
+
 /**
- * Depth of zero annual amplitude [m]: the shallowest envelope depth where the mean annual range
- * (max − min) over the baseline years is at most 0.1 K ([5], threshold from memory); 20 m if none
- * is found within 30 m (a fallback of this engine, reported through the depth itself).
+ * Depth of zero annual amplitude [m]: the shallowest envelope depth at or below 10 m where the mean
+ * annual range (max − min) over the baseline years is at most 0.1 K ([5], threshold from memory);
+ * 20 m if none is found down to 30 m (a fallback of this engine). The search starts at 10 m because
+ * in warm permafrost the latent heat of the unfrozen water damps the annual range near 0 °C at
+ * much shallower depths (a "zero curtain" just below the active layer), which is not the depth of
+ * zero annual amplitude; in permafrost that depth lies typically at 10–20 m ([5], from memory).
  */
 export function zeroAnnualAmplitudeDepthM(records: readonly YearRecord[]): number {
   const z = ENVELOPE_DEPTHS_M;
   for (let i = 0; i < z.length; i++) {
+    if (z[i] < ZAA_MIN_DEPTH_M) continue;
     if (z[i] > 30) break;
     let s = 0;
     for (const r of records) s += r.maxC[i] - r.minC[i];
