@@ -156,3 +156,28 @@ describe('calibration meets its targets when observations are given (issue 3: MA
     expect(c.n_factor_thaw).toBeLessThanOrEqual(c.n_factor_thaw_range[1]);
   });
 });
+
+describe('talik (drifted snow beside buildings, SSP5-8.5)', () => {
+  it('once a talik forms, the permafrost table lies deeper than the seasonal thaw; onset year and reasons reported', async () => {
+    const s = site();
+    s.snow.scenario_case = 'drifted';
+    s.checklist = { ...s.checklist!, snow_drifts: 'present' };
+    const o = (await runAssessment({ site: s, scenarios: ['SSP5-8.5'], horizons: [2050] }, { cache })).output;
+    const r = o.results[0] as { talik: boolean; talik_onset_year: number | null; permafrost_table_m: number; seasonal_thaw_m: number; hazard: string; hazard_reasons: string[]; not_modelled: string[] };
+    // Engine contract: permafrost_table_m is "deeper than the seasonal thaw once a talik forms".
+    expect(r.talik).toBe(true);
+    expect(r.talik_onset_year).not.toBeNull();
+    expect(r.talik_onset_year!).toBeLessThanOrEqual(2060);
+    expect(r.permafrost_table_m).toBeGreaterThan(r.seasonal_thaw_m);
+    // Year by year: a talik year has its table below the seasonal thaw by at least the talik's 0.2 m
+    // (issue 3's minimum thickness).
+    for (const a of o.annual as { talik: boolean; permafrost_table_m: number | null; seasonal_thaw_m: number }[]) {
+      if (a.talik && a.permafrost_table_m !== null) expect(a.permafrost_table_m - a.seasonal_thaw_m).toBeGreaterThanOrEqual(0.2 - 1e-9);
+    }
+    // Hazard rules (hazard.ts): a talik gives higher concern; the checklist item is a reason and not modelled.
+    expect(r.hazard).toBe('high');
+    expect(r.hazard_reasons).toContain('talik');
+    expect(r.hazard_reasons).toContain('checklist_snow_drifts');
+    expect(r.not_modelled).toEqual(['snow_drifts']);
+  });
+});
