@@ -208,7 +208,46 @@ export interface TalikInfo {
 export class HeatConductionColumn {
   readonly grid: ColumnGrid;
   readonly materials: readonly PhaseChangeMaterial[];
-  bottomHeatFluxWm2: number;
+  // Scalars that take fractional values live in a Float64Array rather than in object fields, so
+  // the fields' representation never changes (a Smi-to-double field transition deoptimises step).
+  private readonly sc = new Float64Array(6);
+  /** Heat flowing upward into the column at its base [W m-2]. */
+  get bottomHeatFluxWm2(): number {
+    return this.sc[5];
+  }
+  set bottomHeatFluxWm2(v: number) {
+    this.sc[5] = v;
+  }
+  private get surfaceT(): number {
+    return this.sc[0];
+  }
+  private set surfaceT(v: number) {
+    this.sc[0] = v;
+  }
+  private get statTime(): number {
+    return this.sc[1];
+  }
+  private set statTime(v: number) {
+    this.sc[1] = v;
+  }
+  private get statMaxThaw(): number {
+    return this.sc[2];
+  }
+  private set statMaxThaw(v: number) {
+    this.sc[2] = v;
+  }
+  private get statSurfaceIn(): number {
+    return this.sc[3];
+  }
+  private set statSurfaceIn(v: number) {
+    this.sc[3] = v;
+  }
+  private get statBaseIn(): number {
+    return this.sc[4];
+  }
+  private set statBaseIn(v: number) {
+    this.sc[4] = v;
+  }
   private readonly maxIterations: number;
   private readonly n: number;
   // flattened material tables
@@ -237,7 +276,6 @@ export class HeatConductionColumn {
   private readonly rhs: Float64Array;
   private readonly cp: Float64Array;
   private snowActive = false;
-  private surfaceT = 0;
   // statistics
   private repDepth = new Float64Array(0);
   private repIdx = new Int32Array(0); // position of the upper point (−1: surface)
@@ -247,11 +285,7 @@ export class HeatConductionColumn {
   private repMax = new Float64Array(0);
   private readonly cellMinH: Float64Array;
   private readonly cellMaxH: Float64Array;
-  private statTime = 0;
   private statSteps = 0;
-  private statMaxThaw = 0;
-  private statSurfaceIn = 0;
-  private statBaseIn = 0;
   private statIter = 0;
   private statNonConv = 0;
 
@@ -626,9 +660,15 @@ export class HeatConductionColumn {
         break;
       }
     }
-    // conductivities for the next step (semi-implicit: held through each step's iterations)
+    // conductivities for the next step (semi-implicit: held through each step's iterations), and
+    // the per-cell enthalpy extremes of the statistics, in one pass
+    const cellMinH = this.cellMinH;
+    const cellMaxH = this.cellMaxH;
     for (let p = SNOW_CELLS; p <= last; p++) {
       const c = p - SNOW_CELLS;
+      const hv = h[p];
+      if (hv < cellMinH[c]) cellMinH[c] = hv;
+      if (hv > cellMaxH[c]) cellMaxH[c] = hv;
       const o = cellOff[c];
       const mm = cellCnt[c];
       const sg = seg[p];
@@ -883,12 +923,7 @@ export class HeatConductionColumn {
       if (v < this.repMin[i]) this.repMin[i] = v;
       if (v > this.repMax[i]) this.repMax[i] = v;
     }
-    const h = this.h;
-    for (let c = 0; c < this.n; c++) {
-      const hv = h[SNOW_CELLS + c];
-      if (hv < this.cellMinH[c]) this.cellMinH[c] = hv;
-      if (hv > this.cellMaxH[c]) this.cellMaxH[c] = hv;
-    }
+    // (per-cell enthalpy extremes are updated in step)
     if (this.surfaceT > this.cellTf[0]) {
       const d = this.thawDepthM();
       if (d > this.statMaxThaw) this.statMaxThaw = d;
