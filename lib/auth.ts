@@ -3,7 +3,8 @@ import NextAuth, { CredentialsSignin } from 'next-auth';
 import Credentials from 'next-auth/providers/credentials';
 import Nodemailer from 'next-auth/providers/nodemailer';
 import { DrizzleAdapter } from '@auth/drizzle-adapter';
-import { eq } from 'drizzle-orm';
+import { randomBytes } from 'node:crypto';
+import { and, eq, lt } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { accounts, sessions, users, verificationTokens } from '@/db/schema';
 import { env } from '@/lib/env';
@@ -21,9 +22,10 @@ import { acceptInvitationForSignIn, InvitationError } from '@/lib/data/invitatio
  *   sent through lib/mail to the configured SMTP), and an invitation link (a one-time credential: the
  *   invitation token proves the address, so accepting it signs the person in).
  * - Sessions are JWTs in an httpOnly cookie (Auth.js cannot keep database sessions for credentials
- *   sign-ins). The token carries only the user id: the role and membership are read from the database
- *   on every request in lib/data/session.ts, so removing or demoting a member takes effect on the next
- *   request whatever the token says.
+ *   sign-ins). The token carries only the user id and a session id: lib/data/session.ts checks on
+ *   every request that the session row (table `sessions`) still exists and has not expired, and reads
+ *   the role and membership from the database, so signing out, removing or demoting a member takes
+ *   effect on the next request whatever the token says.
  * - Session expiry: 8 hours of absolute life, refreshed at most hourly while in use.
  * - Cookies: httpOnly, SameSite=Lax, and Secure with the __Secure- prefix whenever the site is served
  *   over https (Auth.js decides from the request URL; plain http is only for localhost development).
@@ -136,12 +138,28 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
       }
       return true;
     },
+    async jwt({ token, user }) {
+      // A new sign-in: record a server-side session row, so signing out (or expiry) ends this session
+      // for good, even if someone kept a copy of the cookie.
+      if (user?.id) {
+        const sid = randomBytes(32).toString('base64url');
+        await db.delete(sessions).where(and(eq(sessions.userId, user.id), lt(sessions.expires, new Date())));
+        await db.insert(sessions).values({ sessionToken: sid, userId: user.id, expires: new Date(Date.now() + SESSION_MAX_AGE_S * 1000) });
+        token.sid = sid;
+      }
+      return token;
+    },
     async session({ session, token }) {
       if (token.sub) session.user.id = token.sub;
+      (session as typeof session & { sid?: string }).sid = typeof token.sid === 'string' ? token.sid : undefined;
       return session;
     },
   },
   events: {
+    async signOut(message) {
+      const sid = 'token' in message ? message.token?.sid : undefined;
+      if (typeof sid === 'string') await db.delete(sessions).where(eq(sessions.sessionToken, sid));
+    },
     async signIn({ user, account }) {
       const ip = await clientIp().catch(() => null);
       await recordAuditEvent({ event: 'auth.sign_in', organisationId: null, actorUserId: user.id ?? null, subject: user.email ?? null, ip, detail: { method: account?.provider ?? 'unknown' } });

@@ -2,6 +2,7 @@ import 'server-only';
 import { and, desc, eq, inArray, isNull, or } from 'drizzle-orm';
 import { db, type Tx } from '@/db/client';
 import { auditEvents, memberships, users } from '@/db/schema';
+import { clientIp } from '@/lib/rate-limit';
 import { requireActor, ROLES } from './session';
 
 /** Event codes written to the audit log. Dotted, stable: admins filter on them. */
@@ -38,13 +39,15 @@ export interface AuditInput {
  * (tx given) it does throw, so the change and its record commit together.
  */
 export async function recordAuditEvent(input: AuditInput, tx?: Tx): Promise<void> {
+  // Outside a request (scripts, jobs) there are no headers: no IP.
+  const ip = input.ip !== undefined ? input.ip : await clientIp().catch(() => null);
   const row = {
     event: input.event,
     organisationId: input.organisationId,
     actorUserId: input.actorUserId,
     subject: input.subject?.slice(0, 255) ?? null,
     detail: input.detail ?? null,
-    ip: input.ip?.slice(0, 64) ?? null,
+    ip: ip?.slice(0, 64) ?? null,
   };
   if (tx) {
     await tx.insert(auditEvents).values(row);

@@ -2,9 +2,9 @@ import 'server-only';
 import { cache } from 'react';
 import { cookies, headers } from 'next/headers';
 import { forbidden, notFound, redirect } from 'next/navigation';
-import { asc, eq } from 'drizzle-orm';
+import { and, asc, eq, gt } from 'drizzle-orm';
 import { db } from '@/db/client';
-import { memberships, organisations, roles, users, type Role } from '@/db/schema';
+import { memberships, organisations, roles, sessions, users, type Role } from '@/db/schema';
 import { auth } from '@/lib/auth';
 
 /**
@@ -58,14 +58,23 @@ export interface SignedInUser {
 /** The signed-in person as the users table has them now, or null (no session, or the user is gone). */
 export const getSignedInUser = cache(async (): Promise<SignedInUser | null> => {
   let userId: string | undefined;
+  let sid: string | undefined;
   try {
-    userId = (await auth())?.user?.id;
+    const session = await auth();
+    userId = session?.user?.id;
+    sid = (session as { sid?: string } | null)?.sid;
   } catch {
     // A damaged or foreign cookie is "not signed in", not an error page.
     return null;
   }
-  if (!userId) return null;
-  const [user] = await db.select({ userId: users.id, email: users.email, name: users.name, locale: users.locale }).from(users).where(eq(users.id, userId)).limit(1);
+  if (!userId || !sid) return null;
+  // The session row must still exist (deleted on sign-out) and be unexpired.
+  const [user] = await db
+    .select({ userId: users.id, email: users.email, name: users.name, locale: users.locale })
+    .from(sessions)
+    .innerJoin(users, eq(users.id, sessions.userId))
+    .where(and(eq(sessions.sessionToken, sid), eq(sessions.userId, userId), gt(sessions.expires, new Date())))
+    .limit(1);
   return user ?? null;
 });
 

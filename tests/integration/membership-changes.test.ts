@@ -80,6 +80,19 @@ describe('membership changes take effect on the next request', () => {
     expect((await person.get('/workspace')).body).toContain('council');
   });
 
+  it('signing out ends the session, even for a copy of the cookie kept from before', async () => {
+    const m = await tempMember('signout', nivalenId, 'planner');
+    const person = new AppClient('signout');
+    await person.signInWithPassword(m.email, PASSWORD);
+    const kept = person.clone('kept copy');
+    expect((await kept.get('/workspace')).status).toBe(200);
+    const out = await person.action('app/(auth)/sign-out/actions.ts#signOutAction', []);
+    expect(out.redirect).toMatch(/^\/sign-in/);
+    const again = await kept.get('/workspace');
+    expect(again.status).toBe(307);
+    expect(again.redirect).toMatch(/^\/sign-in\?returnTo=/);
+  });
+
   it('the last admin cannot demote or remove themself', async () => {
     // Cairnholm's seeded admin is its only admin.
     const admins = await db.select({ id: memberships.id }).from(memberships).where(and(eq(memberships.organisationId, cairnholmId), eq(memberships.role, 'admin')));
