@@ -96,6 +96,22 @@ describe('HeatConductionColumn', () => {
     expect(magt[magt.length - 1][1] - magt[0][1]).toBeGreaterThan(1); // and the effect is not nil
   });
 
+  it('with snow, the soil budget closes: heat through the snow–soil interface and the base = change of soil enthalpy', () => {
+    // Common practice (conservative finite volumes, Patankar 1980); snow from Sturm et al. 1997.
+    const col = siteLike();
+    col.setTemperatureProfile(() => -3);
+    const e0 = col.totalEnthalpyJm2();
+    const snow = { thicknessM: 0.4, conductivityWmK: snowConductivitySturm1997(280), heatCapacityJm3K: snowHeatCapacity(280) };
+    for (let d = 0; d < 2 * 365; d++) {
+      const ts = -5 + 14 * Math.cos((2 * Math.PI * ((d % 365) - 200)) / 365);
+      col.step(DAY, ts, ts < 0 ? snow : null);
+    }
+    const st = col.statistics();
+    const de = col.totalEnthalpyJm2() - e0;
+    expect(Math.abs((st.surfaceHeatInJm2 + st.baseHeatInJm2 - de) / Math.max(Math.abs(de), 1e6))).toBeLessThan(1e-9);
+    expect(st.nonConvergedSteps).toBe(0);
+  });
+
   it('getState/setState restore a cached state exactly (same result after the same steps)', () => {
     const col = siteLike();
     col.setTemperatureProfile(() => -3);

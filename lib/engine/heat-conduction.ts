@@ -172,6 +172,8 @@ export interface ColumnState {
   enthalpyJm3: Float64Array;
   snowTemperatureC: Float64Array;
   snowActive: boolean;
+  /** Ground-surface temperature after the last step [°C] (for thawDepthM right after setState). */
+  groundSurfaceTemperatureC?: number;
 }
 
 /** Statistics over every step since the last `resetStatistics()`. */
@@ -481,7 +483,12 @@ export class HeatConductionColumn {
 
   /** A copy of the full state (soil enthalpy and snow temperatures). */
   getState(): ColumnState {
-    return { enthalpyJm3: this.getEnthalpy(), snowTemperatureC: this.t.slice(0, SNOW_CELLS), snowActive: this.snowActive };
+    return {
+      enthalpyJm3: this.getEnthalpy(),
+      snowTemperatureC: this.t.slice(0, SNOW_CELLS),
+      snowActive: this.snowActive,
+      groundSurfaceTemperatureC: this.surfaceT,
+    };
   }
 
   /** Restores a state from `getState()` (copied). */
@@ -489,6 +496,7 @@ export class HeatConductionColumn {
     this.setEnthalpy(state.enthalpyJm3);
     for (let p = 0; p < SNOW_CELLS; p++) this.t[p] = state.snowTemperatureC[p] ?? 0;
     this.snowActive = state.snowActive;
+    this.surfaceT = state.groundSurfaceTemperatureC ?? this.t[SNOW_CELLS];
   }
 
   private refreshAll(): void {
