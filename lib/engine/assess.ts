@@ -162,6 +162,14 @@ interface BaselineGround {
   anyIceAssumed: boolean;
 }
 
+/**
+ * Baseline state of the ground for settlement and hazard: the baseline permafrost table (deepest of
+ * the baseline years) and base, the thaw-strain profile clipped to the ground frozen all through
+ * the baseline, and the mean strain of the transition zone below the table (2 m; Shur, Hinkel &
+ * Nelson 2005, doi:10.1002/ppp.518).
+ * @param p Prepared site (layers, freezing points). @param base Baseline-period year records.
+ * @returns Depths [m], strains [-] and ice-assumption flags.
+ */
 function baselineGround(p: PreparedSite, base: YearRecord[]): BaselineGround {
   const profile = thawStrainProfile(p.layers);
   const tables = base.map((r) => r.permafrostTableM);
@@ -173,7 +181,6 @@ function baselineGround(p: PreparedSite, base: YearRecord[]): BaselineGround {
   // Base: the shallowest envelope depth below the table whose baseline maximum exceeds the freezing
   // point of its layer (coarse, at the envelope depths), else the column depth.
   let baseM = p.grid.depthM;
-  const last = base[base.length - 1];
   for (let i = 0; i < ENVELOPE_DEPTHS_M.length; i++) {
     const z = ENVELOPE_DEPTHS_M[i];
     if (z <= tableM) continue;
@@ -183,7 +190,6 @@ function baselineGround(p: PreparedSite, base: YearRecord[]): BaselineGround {
       break;
     }
   }
-  void last;
   const strain = profile
     .map((s) => ({ ...s, top_m: Math.max(s.top_m, tableM), bottom_m: Math.min(s.bottom_m, baseM) }))
     .filter((s) => s.bottom_m > s.top_m);
@@ -198,6 +204,7 @@ function baselineGround(p: PreparedSite, base: YearRecord[]): BaselineGround {
   };
 }
 
+/** Freezing point [°C] of the layer at a depth [m] (soil-properties.ts, by salinity). */
 function freezingPointAt(p: PreparedSite, depthM: number): number {
   let top = 0;
   for (let i = 0; i < p.layers.length; i++) {
@@ -207,7 +214,12 @@ function freezingPointAt(p: PreparedSite, depthM: number): number {
   return p.freezingPointsC[p.freezingPointsC.length - 1];
 }
 
-/** Summary of one window of years (baseline or scenario × horizon). */
+/**
+ * Summary of one window of years (baseline or scenario × horizon): window means of the year
+ * records, air-index design values (UFC 3-130-06 via air-indices.ts), cumulative settlement at the
+ * window end (settlement.ts), the hazard rating (hazard.ts) and the min/max envelope.
+ * Units: °C, °C·d, m as in the field names.
+ */
 function summarizeWindow(
   p: PreparedSite,
   history: SiteHistory,
