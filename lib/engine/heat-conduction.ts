@@ -612,23 +612,23 @@ export class HeatConductionColumn {
         tw = tp;
         sw = sp;
       }
-      for (let p = last - 1; p >= start; p--) rhs[p] -= cp[p] * rhs[p + 1];
-      // linearised boundary temperatures (the ones the fluxes of this solve used)
-      tTopLin = t[start] + s[start] * rhs[start];
-      tSoilLin = t[SNOW_CELLS] + s[SNOW_CELLS] * rhs[SNOW_CELLS];
-      if (withSnow) {
-        tAboveSoilLin = t[SNOW_CELLS - 1] + s[SNOW_CELLS - 1] * rhs[SNOW_CELLS - 1];
-        gInterface = g[SNOW_CELLS - 1];
-      }
-      // update the iterate; snow cells are linear, soil cells are re-evaluated on their curve
-      for (let p = start; p < SNOW_CELLS; p++) {
-        h[p] += rhs[p];
-        t[p] = h[p] * s[p];
-      }
+      // Back substitution fused with the update of the iterate (bottom up). The linearised
+      // boundary temperatures (the ones this solve's fluxes used) are taken before each update.
       let maxErr = 0;
       let maxDh = 0;
-      for (let p = SNOW_CELLS; p <= last; p++) {
-        const d = rhs[p];
+      let next = 0;
+      for (let p = last; p >= start; p--) {
+        const d = p === last ? rhs[p] : rhs[p] - cp[p] * next;
+        next = d;
+        if (p === start) tTopLin = t[p] + s[p] * d;
+        if (p < SNOW_CELLS) {
+          // snow cells are linear
+          if (p === SNOW_CELLS - 1) tAboveSoilLin = t[p] + s[p] * d;
+          h[p] += d;
+          t[p] = h[p] * s[p];
+          continue;
+        }
+        if (p === SNOW_CELLS) tSoilLin = t[p] + s[p] * d;
         const hv = h[p] + d;
         const tLin = t[p] + s[p] * d;
         h[p] = hv;
@@ -641,7 +641,6 @@ export class HeatConductionColumn {
         let sg = before;
         while (sg < mm && hv > bpH[o + sg]) sg++;
         while (sg > 0 && hv <= bpH[o + sg - 1]) sg--;
-        if (sg !== before) seg[p] = sg;
         if (sg === 0) {
           const sl = invCb[c];
           s[p] = sl;
@@ -656,10 +655,12 @@ export class HeatConductionColumn {
           t[p] = bpT[o + sg - 1] + (hv - bpH[o + sg - 1]) * sl;
         }
         if (sg !== before) {
+          seg[p] = sg;
           const e = t[p] > tLin ? t[p] - tLin : tLin - t[p];
           if (e > maxErr) maxErr = e;
         }
       }
+      if (withSnow) gInterface = g[SNOW_CELLS - 1];
       // Converged when the linearisation was exact to LINEARISATION_TOLERANCE_K: no cell changed
       // segment (T(H) is then linear), or those that did landed where the linearised temperature
       // is within the tolerance of T(H) (smooth unfrozen-water curves); or the update is negligible.
