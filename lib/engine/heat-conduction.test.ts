@@ -73,7 +73,7 @@ describe('HeatConductionColumn', () => {
   });
 
   it('sanity: more snow never gives colder ground (mean annual temperature at 2, 5 and 10 m)', () => {
-    // Common practice: snow insulates the ground in winter (e.g. Goodrich 1982, Can. Geotech. J. 19).
+    // Common practice: snow insulates the ground in winter (e.g. Goodrich 1982, Can. Geotech. J. 19; from memory).
     const rho = 250;
     const snowK = snowConductivitySturm1997(rho);
     const snowC = snowHeatCapacity(rho);

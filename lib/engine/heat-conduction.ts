@@ -43,7 +43,7 @@
  * References
  * [1] H. S. Carslaw, J. C. Jaeger, Conduction of Heat in Solids, 2nd ed., Oxford, 1959.
  * [2] V. R. Voller, C. R. Swaminathan, B. G. Thomas, "Fixed grid techniques for phase change problems:
- *     a review," Int. J. Numer. Methods Eng. 30(4), 875–898, 1990, doi:10.1002/nme.1620300419.
+ *     a review," Int. J. Numer. Methods Eng. 30(4), 875–898, 1990.
  * [3] S. V. Patankar, Numerical Heat Transfer and Fluid Flow, Hemisphere, 1980 (harmonic face
  *     conductivity, tridiagonal matrix algorithm).
  */

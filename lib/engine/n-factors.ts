@@ -24,7 +24,7 @@
  *     3rd Int. Conf. Permafrost, 1978).
  * [3] A. E. Klene, F. E. Nelson, N. I. Shiklomanov, K. M. Hinkel, "The n-factor in natural
  *     landscapes: variability of air and soil-surface temperatures, Kuparuk River basin, Alaska,
- *     U.S.A.," Arct. Antarct. Alp. Res. 33(2), 140–148, 2001, doi:10.2307/1552214.
+ *     U.S.A.," Arct. Antarct. Alp. Res. 33(2), 140–148, 2001.
  */
 import { z } from 'zod';
 

@@ -34,9 +34,9 @@
  *     Clim. Dyn. 30, 145–160, 2008, doi:10.1007/s00382-007-0278-1 (mixing organic and mineral
  *     properties by the organic fraction).
  * [7] E. C. Hivon, D. C. Sego, "Strength of frozen saline soils," Can. Geotech. J. 32(2),
- *     336–354, 1995, doi:10.1139/t95-035.
+ *     336–354, 1995 (citation from memory).
  * [8] J. F. Nixon, G. Lem, "Creep and strength testing of frozen saline fine-grained soils,"
- *     Can. Geotech. J. 21(3), 518–529, 1984, doi:10.1139/t84-054.
+ *     Can. Geotech. J. 21(3), 518–529, 1984 (citation from memory).
  */
 import { z } from 'zod';
 import {
