@@ -31,8 +31,15 @@
  *   Conductivity is semi-implicit: evaluated from the state at the start of each step and held
  *   through its iterations (k(H) is continuous, varying with the thawed fraction inside the phase
  *   change; lagging it within the step is a first-order-in-time choice that keeps the iterations
- *   few and avoids a slowly oscillating fixed point in thin, partly thawed top cells). Fluxes are conservative, so the
- *   heat that crosses the boundaries equals the change of stored enthalpy to round-off.
+ *   few and avoids a slowly oscillating fixed point in thin, partly thawed top cells). Fluxes are
+ *   conservative, so the heat that crosses the boundaries equals the change of stored enthalpy to
+ *   round-off. A step that does not converge in `maxIterations` (default 30) is kept and counted
+ *   in `statistics().nonConvergedSteps`.
+ * - Thaw front: inside a partly thawed cell from its thawed fraction (thawed part on top),
+ *   elsewhere by linear interpolation of T − T_f between cell centres.
+ * - Speed (measured with heat-conduction-bench.ts, 124 cells, daily steps, isothermal materials):
+ *   about 1.3 iterations a step and 12–23 million node-steps per second on this shared machine;
+ *   with unfrozen-water curves about 2.1 iterations a step.
  * - Snow: up to `SNOW_CELLS` equal cells of the given thickness on top of the soil, sensible heat only,
  *   solved in the same tridiagonal system; their temperatures carry over between steps and are capped
  *   at 0 °C (melting). When snow appears, its cells start on the line between the surface and the
