@@ -83,3 +83,44 @@ describe('siteSchema: every field error is named', () => {
     });
   }
 });
+
+describe('siteSchema: a wrong value in any field names that field', () => {
+  // Every leaf of the example site (plus the optional fields it leaves out), set to a value of the
+  // wrong type, must give an error whose path is exactly that field (engine contract: `path: problem`).
+  const full = structuredClone(exampleSite) as any;
+  full.climate.regional_factors = new Array(12).fill(1.5);
+  full.climate.local_projection = { baseline_period: [1995, 2014], series: [{ year: 2050, annual_change_c: 2 }] };
+  full.surface.n_factor_thaw = 1;
+  full.surface.n_factor_freeze = 0.5;
+  full.observed = {
+    ground_temperature_profile: { date: '2019-08-15', points: [{ depth_m: 1, temperature_c: -1 }, { depth_m: 10, temperature_c: -3 }] },
+    magt_c: -3,
+    magt_depth_m: 10,
+    active_layer_thickness_m: 0.6,
+  };
+  const leaves: (string | number)[][] = [];
+  const walk = (v: unknown, path: (string | number)[]) => {
+    if (Array.isArray(v)) v.forEach((x, i) => walk(x, [...path, i]));
+    else if (v && typeof v === 'object') for (const [k, x] of Object.entries(v)) walk(x, [...path, k]);
+    else leaves.push(path);
+  };
+  walk(full, []);
+  it('the full example parses', () => {
+    expect(siteSchema.safeParse(full).success).toBe(true);
+  });
+  for (const path of leaves) {
+    const name = path.map((k) => (typeof k === 'number' ? `[${k}]` : `.${k}`)).join('').replace(/^\./, '');
+    it(name, () => {
+      const s = structuredClone(full);
+      let o = s;
+      for (const k of path.slice(0, -1)) o = o[k];
+      const last = path[path.length - 1];
+      o[last] = typeof o[last] === 'string' ? 12345 : 'wrong';
+      const r = siteSchema.safeParse(s);
+      expect(r.success).toBe(false);
+      const lines = formatIssues(r.error!);
+      // The field itself, or (for the scalar-or-12 snow density union) the field as a whole.
+      expect(lines.some((l) => l.startsWith(`${name}: `))).toBe(true);
+    });
+  }
+});
