@@ -94,9 +94,9 @@ export const PERMAFROST_SOC_TOTAL_PGC = 1300;
 
 
 // ---- Ground ice and settlement (assess topic) -----------------------------------------------
-/** MAGT above which permafrost is called warm [°C]: −2 (common practice in cold-regions engineering; cf. Nelson et al. 2001, doi:10.1038/35069701). */
+/** MAGT above which permafrost is called warm [°C]: −2 (common practice in cold-regions engineering; no single published source is claimed). */
 export const WARM_PERMAFROST_C = -2;
-/** MAGT above which permafrost is called very warm [°C]: −1 (common practice; ice-rich ground this warm creeps and loses strength, Andersland & Ladanyi 2004, ch. 6). */
+/** MAGT above which permafrost is called very warm [°C]: −1 (common practice; frozen soil loses strength and creeps faster as it nears 0 °C, Andersland & Ladanyi 2004, mechanical-properties chapter; from memory). */
 export const VERY_WARM_PERMAFROST_C = -1;
 /** Cumulative thaw settlement from which the screening raises moderate concern [m]: 0.10 (common practice, a screening choice of this engine). */
 export const SETTLEMENT_MODERATE_M = 0.1;

@@ -36,7 +36,7 @@ describe('hazard rules', () => {
       hazard: 'moderate',
       hazard_reasons: ['warm_permafrost', 'ice_rich_below_active_layer'],
     });
-    // Very warm and ice-rich → higher (Andersland & Ladanyi 2004, ch. 6: warm ice-rich ground creeps).
+    // Very warm and ice-rich → higher (hazard.ts rule; warm frozen soil creeps faster, Andersland & Ladanyi 2004, from memory).
     expect(rateHazard({ ...base, groundTemperatureC: -0.5, transitionZoneStrain: 0.2 }).hazard).toBe('high');
   });
 

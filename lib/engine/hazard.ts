@@ -11,7 +11,7 @@
  * cumulative settlement and the ice content just below the permafrost table) with the ground's
  * thermal state (mean annual ground temperature, talik). Thresholds are in lib/engine/constants.ts:
  * warm permafrost above −2 °C and very warm above −1 °C (common practice in cold-regions
- * engineering; warm ice-rich permafrost loses strength and creeps, [3, ch. 6]); settlement 0.10 m
+ * engineering; frozen soil loses strength and creeps faster near 0 °C, [3], from memory); settlement 0.10 m
  * and 0.30 m (common practice, a screening choice of this engine).
  *
  * Rules (each adds its reason code; the rating is the highest level any rule gives):
