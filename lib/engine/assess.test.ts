@@ -69,6 +69,7 @@ describe('assessment: five scenarios, three horizons', () => {
     expect(out.baseline.settlement_m).toBe(0);
   });
 
+  // Issue 3: the spin-up is bounded and reports non-convergence; here it must have converged.
   it('the spin-up converged and the solver converged in every step', () => {
     expect(out.site_model.spin_up.converged).toBe(true);
     // Convergence criterion of issue 3: the annual-mean profile changes < 0.01 °C a year.
@@ -77,6 +78,7 @@ describe('assessment: five scenarios, three horizons', () => {
   });
 
   it('the worker thread and the in-process path give identical results; the cache gives identical output', async () => {
+    // Parallel runs and caching must not change a number (common practice; issue 3 asks for both).
     // Two scenarios in-process, history from the cache.
     const inProcess = await runAssessment({ site: site(), scenarios: ['SSP1-2.6', 'SSP5-8.5'], horizons: [2030, 2050, 2080] }, { cache, useWorkers: false });
     expect(inProcess.stats.cacheHit).toBe(true);
@@ -92,6 +94,7 @@ describe('assessment: five scenarios, three horizons', () => {
     expect(out.site_model.calibration.status).toBe('uncalibrated');
   });
 
+  // The directory cache must return exactly what was stored (common practice).
   it('round-trips a history through the directory cache', () => {
     const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'thawline-cache-'));
     try {

@@ -53,6 +53,7 @@ describe('hazard rules', () => {
     expect(rateHazard({ ...base, baselinePermafrost: false }).hazard_reasons).toEqual(['no_permafrost_modelled']);
   });
 
+  // Issue 3: each "present" checklist answer adds a stated reason and a "not modelled" entry.
   it('each checklist item present adds a reason and a not-modelled entry, and raises low to moderate', () => {
     const r = rateHazard({ ...base, checklist: { ponding: 'present', groundwater_flow: 'absent', heated_buildings: 'present', snow_drifts: 'unknown', surface_disturbance: 'absent', recent_fire: 'absent', erosion_or_slope_movement: 'absent' } });
     expect(r.not_modelled).toEqual(['ponding', 'heated_buildings']);
@@ -62,6 +63,7 @@ describe('hazard rules', () => {
     expect(rateHazard({ ...base, checklist: { ponding: 'unknown', groundwater_flow: 'absent', heated_buildings: 'absent', snow_drifts: 'absent', surface_disturbance: 'absent', recent_fire: 'absent', erosion_or_slope_movement: 'absent' } }).not_modelled).toEqual([]);
   });
 
+  // Issue 3: a confidence level from measured or assumed inputs (rule in hazard.ts).
   it('confidence follows measured vs assumed inputs', () => {
     expect(rateHazard(base).confidence).toBe('partly_measured_inputs');
     expect(rateHazard({ ...base, thermalStateObserved: true }).confidence).toBe('measured_inputs');
