@@ -2,6 +2,8 @@ import { describe, expect, it } from 'vitest';
 import {
   ENVELOPE_DEPTHS_M,
   computeHistory,
+  createSiteColumn,
+  spinUp,
   dailySnowCovers,
   defaultSurfaceParameters,
   extendLayers,
@@ -119,5 +121,24 @@ describe('diagnostics', () => {
     for (const year of [2006, 2010, 2014]) expect(y(cold, year).meanC[i10]).toBeLessThan(y(warm, year).meanC[i10]);
     // Before the date both runs are the same spin-up and history.
     expect(y(cold, 2004).meanC).toEqual(y(warm, 2004).meanC);
+  });
+});
+
+describe('spin-up and calibration reporting', () => {
+  // Issue 3: the spin-up is bounded and a spin-up that did not converge is reported.
+  it('reports a spin-up cut short by its bound as not converged', () => {
+    const p = prepareSite(site());
+    const r = spinUp(createSiteColumn(p), p, defaultSurfaceParameters(p), p.site.climate.monthly_air_temperature_c, false, 2);
+    expect(r).toMatchObject({ years: 2, converged: false });
+    expect(Number.isFinite(r.maxChangeK)).toBe(true);
+  });
+
+  // Issue 3: calibration stays within published ranges and says so when it cannot match.
+  it('an active layer the published n-factor range cannot reach is reported as calibration_not_reached', () => {
+    const h = computeHistory(prepareSite(site((x) => (x.observed = { active_layer_thickness_m: 4 }))));
+    expect(h.calibration.status).toBe('calibration_not_reached');
+    const c = h.calibration.parameters;
+    expect(c.n_factor_thaw).toBeLessThanOrEqual(c.n_factor_thaw_range[1]);
+    expect(h.calibration.achieved.active_layer_thickness_m!).toBeLessThan(4 * 0.8);
   });
 });
