@@ -13,7 +13,8 @@ import { headers } from 'next/headers';
  *
  * Limits (common practice, in the range OWASP's authentication guidance describes):
  *  - per address: 5 failed password attempts per 15 minutes; 5 e-mail links per 15 minutes;
- *  - per IP: 60 sign-in attempts of any kind per 15 minutes (generous: an office may share one IP);
+ *  - per IP: 300 sign-in attempts of any kind per 15 minutes (20 a minute: slows guessing across many
+ *    addresses, while a whole office or community hall behind one address can still sign in);
  *  - invitations: 20 acceptance attempts per IP per 15 minutes; 30 invitations sent per admin per hour.
  */
 const g = globalThis as unknown as { thawlineLimiters?: ReturnType<typeof makeLimiters> };
@@ -22,7 +23,7 @@ function makeLimiters() {
   return {
     passwordPerAddress: new RateLimiterMemory({ keyPrefix: 'pw-addr', points: 5, duration: 15 * 60 }),
     linkPerAddress: new RateLimiterMemory({ keyPrefix: 'link-addr', points: 5, duration: 15 * 60 }),
-    signInPerIp: new RateLimiterMemory({ keyPrefix: 'signin-ip', points: 60, duration: 15 * 60 }),
+    signInPerIp: new RateLimiterMemory({ keyPrefix: 'signin-ip', points: 300, duration: 15 * 60 }),
     invitationPerIp: new RateLimiterMemory({ keyPrefix: 'invite-ip', points: 20, duration: 15 * 60 }),
     invitationsSentPerAdmin: new RateLimiterMemory({ keyPrefix: 'invite-send', points: 30, duration: 60 * 60 }),
   };

@@ -236,16 +236,26 @@ const actionArgs: Record<string, (v: Variant) => unknown[]> = {
   'action app/invite/[token]/actions.ts#acceptInvitation': () => [{ token: forgedToken() }],
   'action app/(workspace)/actions.ts#switchOrganisationAction': (v) => [{ organisationId: v === 'own' ? fx.own.organisationId : fx.other.organisationId }],
   'action app/(workspace)/actions.ts#setLocaleAction': () => [{ locale: 'en' }],
+  'action app/(workspace)/communities/[slug]/profiles/[profile]/outlook/actions.ts#runOutlookAction': (v) => [
+    { communitySlug: (v === 'own' ? fx.own : fx.other).communitySlug, profileSlug: (v === 'own' ? fx.own : fx.other).profileSlug },
+  ],
   'action app/(workspace)/admin/members/actions.ts#inviteMember': () => [{ email: uniqueAddress(`${fx.prefix}-invitee`), role: 'council' }],
   'action app/(workspace)/admin/members/actions.ts#changeRole': (v) => [{ membershipId: v === 'own' ? fx.own.councilMembershipId : fx.other.membershipId, role: 'council' }],
   'action app/(workspace)/admin/members/actions.ts#removeMemberAction': (v) => [{ membershipId: v === 'own' ? fx.own.tempMembershipId : fx.other.membershipId }],
   'action app/(workspace)/admin/members/actions.ts#revokeInvitationAction': (v) => [{ invitationId: v === 'own' ? fx.own.invitationId : fx.other.invitationId }],
 };
 
+/** Rows whose action ends the session it runs in: they get a session of their own. */
+const ENDS_SESSION = new Set(['action app/(auth)/sign-out/actions.ts#signOutAction']);
+
 async function exercise(row: Row, col: Column, v: Variant): Promise<Reply> {
-  // Each call works on a copy of the person's cookies, so sign-out or a language change does not
+  // Each call works on a copy of the person's cookies, so a language or organisation change does not
   // leak into the next cell.
-  const client = clients[col].clone();
+  let client = clients[col].clone();
+  if (ENDS_SESSION.has(row.key) && col !== 'anonymous') {
+    client = new AppClient(col);
+    await client.signInWithPassword(PEOPLE[col]);
+  }
   const [kind, ...rest] = row.key.split(' ');
   if (kind === 'page') return client.get(pagePath(rest[0], v));
   if (kind === 'route') {
