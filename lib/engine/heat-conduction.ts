@@ -8,8 +8,8 @@
  * - `new HeatConductionColumn(grid, materials, { bottomHeatFluxWm2 })`, grid from grid.ts.
  * - `step(dtSeconds, surfaceTemperatureC, snow?)`: one implicit step; `snow` = `{ thicknessM,
  *   conductivityWmK, heatCapacityJm3K }` or null/undefined for bare ground.
- * - State: `getState()` / `setState()` (Float64Array copies: enthalpy per cell and the snow
- *   temperatures), `getEnthalpy()`, `getTemperatures()`, `setTemperatureProfile(fn)`,
+ * - State: `getState()` / `setState()` (Float64Array copies: enthalpy per cell, the snow
+ *   temperatures and the predictor's memory, so a restored state continues bit for bit), `getEnthalpy()`, `getTemperatures()`, `setTemperatureProfile(fn)`,
  *   `setTemperatures(arr)`.
  * - Diagnostics: `thawDepthM()`, `groundSurfaceTemperatureC()`, `temperatureAtDepthC(z)`,
  *   `permafrostTableM(maxEnthalpy)`, `detectTalik(minEnthalpy, maxEnthalpy)`.
@@ -33,7 +33,8 @@
  *   change; lagging it within the step is a first-order-in-time choice that keeps the iterations
  *   few and avoids a slowly oscillating fixed point in thin, partly thawed top cells). Fluxes are
  *   conservative, so the heat that crosses the boundaries equals the change of stored enthalpy to
- *   round-off. A step that does not converge in `maxIterations` (default 30) is kept and counted
+ *   round-off. Newton starts from a predictor, the previous step's trend (H^n + ΔH_prev·Δt/Δt_prev),
+ *   which changes only the starting point and saves iterations. A step that does not converge in `maxIterations` (default 30) is kept and counted
  *   in `statistics().nonConvergedSteps`.
  * - Thaw front: inside a partly thawed cell from its thawed fraction (thawed part on top),
  *   elsewhere by linear interpolation of T − T_f between cell centres.
@@ -181,6 +182,10 @@ export interface ColumnState {
   snowActive: boolean;
   /** Ground-surface temperature after the last step [°C] (for thawDepthM right after setState). */
   groundSurfaceTemperatureC?: number;
+  /** Predictor memory (enthalpy at the start of the last step, and that step [s]), so a restored
+   * state continues bit for bit as the original would. */
+  previousEnthalpyJm3?: Float64Array;
+  previousStepS?: number;
 }
 
 /** Statistics over every step since the last `resetStatistics()`. */
@@ -219,7 +224,14 @@ export class HeatConductionColumn {
   readonly materials: readonly PhaseChangeMaterial[];
   // Scalars that take fractional values live in a Float64Array rather than in object fields, so
   // the fields' representation never changes (a Smi-to-double field transition deoptimises step).
-  private readonly sc = new Float64Array(6);
+  private readonly sc = new Float64Array(7);
+  /** Previous step [s]; < 0: no predictor (fresh or reset state). */
+  private get dtPrevS(): number {
+    return this.sc[6];
+  }
+  private set dtPrevS(v: number) {
+    this.sc[6] = v;
+  }
   /** Heat flowing upward into the column at its base [W m-2]. */
   get bottomHeatFluxWm2(): number {
     return this.sc[5];
@@ -275,6 +287,7 @@ export class HeatConductionColumn {
   // state over positions p = 0 … SNOW_CELLS + n − 1; soil cell c is at p = SNOW_CELLS + c
   private readonly h: Float64Array;
   private readonly hOld: Float64Array;
+  private readonly hPrev: Float64Array; // enthalpy at the start of the previous step (predictor)
   private readonly t: Float64Array;
   private readonly s: Float64Array;
   private readonly k: Float64Array;
@@ -360,6 +373,7 @@ export class HeatConductionColumn {
     const np = SNOW_CELLS + n;
     this.h = new Float64Array(np);
     this.hOld = new Float64Array(np);
+    this.hPrev = new Float64Array(np);
     this.t = new Float64Array(np);
     this.s = new Float64Array(np);
     this.k = new Float64Array(np);
@@ -495,6 +509,8 @@ export class HeatConductionColumn {
       snowTemperatureC: this.t.slice(0, SNOW_CELLS),
       snowActive: this.snowActive,
       groundSurfaceTemperatureC: this.surfaceT,
+      previousEnthalpyJm3: this.hPrev.slice(SNOW_CELLS),
+      previousStepS: this.dtPrevS,
     };
   }
 
@@ -504,9 +520,14 @@ export class HeatConductionColumn {
     for (let p = 0; p < SNOW_CELLS; p++) this.t[p] = state.snowTemperatureC[p] ?? 0;
     this.snowActive = state.snowActive;
     this.surfaceT = state.groundSurfaceTemperatureC ?? this.t[SNOW_CELLS];
+    if (state.previousEnthalpyJm3 && state.previousEnthalpyJm3.length === this.n && state.previousStepS !== undefined) {
+      this.hPrev.set(state.previousEnthalpyJm3, SNOW_CELLS);
+      this.dtPrevS = state.previousStepS;
+    }
   }
 
   private refreshAll(): void {
+    this.dtPrevS = -1;
     for (let p = SNOW_CELLS; p < SNOW_CELLS + this.n; p++) {
       this.seg[p] = 0;
       this.evalSoil(p);
@@ -580,6 +601,37 @@ export class HeatConductionColumn {
     const invCa = this.cellInvCAbove;
     const last = end - 1;
     const kDirty = this.kDirty;
+    // Predictor: start Newton from the previous step's trend, H* = H^n + (H^n − H^(n−1))·Δt/Δt_prev
+    // (soil cells only; conductivities stay those of H^n). It changes only the starting point of
+    // the iteration, not the converged solution, and saves iterations under smooth forcing.
+    const hPrev = this.hPrev;
+    const ratio = this.dtPrevS > 0 ? dtSeconds / this.dtPrevS : 0;
+    for (let p = SNOW_CELLS; p <= last; p++) {
+      const hn = h[p];
+      const dh = (hn - hPrev[p]) * ratio;
+      hPrev[p] = hn;
+      if (dh === 0) continue;
+      const hv = hn + dh;
+      h[p] = hv;
+      const c = p - SNOW_CELLS;
+      const o = cellOff[c];
+      const mm = cellCnt[c];
+      let sg = seg[p];
+      while (sg < mm && hv > bpH[o + sg]) sg++;
+      while (sg > 0 && hv <= bpH[o + sg - 1]) sg--;
+      seg[p] = sg;
+      if (sg === 0) {
+        s[p] = invCb[c];
+        t[p] = bpT[o] + (hv - bpH[o]) * s[p];
+      } else if (sg === mm) {
+        s[p] = invCa[c];
+        t[p] = bpT[o + mm - 1] + (hv - bpH[o + mm - 1]) * s[p];
+      } else {
+        s[p] = slT[o + sg];
+        t[p] = bpT[o + sg - 1] + (hv - bpH[o + sg - 1]) * s[p];
+      }
+    }
+    this.dtPrevS = dtSeconds;
     while (iter < this.maxIterations) {
       iter++;
       // Assemble (residual, Jacobian) and eliminate forward in one pass (Thomas algorithm; the
