@@ -277,6 +277,10 @@ export interface RunCarryJson {
   enthalpyJm3: number[];
   snowTemperatureC: number[];
   snowActive: boolean;
+  /** Optional parts of the solver state (heat-conduction.ts `ColumnState`), kept when present. */
+  groundSurfaceTemperatureC?: number;
+  previousEnthalpyJm3?: number[];
+  previousStepS?: number;
   prevMinH: number[] | null;
   prevMaxH: number[] | null;
   prevDailyAirC: number[] | null;
@@ -287,6 +291,9 @@ export function carryToJson(c: RunCarry): RunCarryJson {
     enthalpyJm3: Array.from(c.state.enthalpyJm3),
     snowTemperatureC: Array.from(c.state.snowTemperatureC),
     snowActive: c.state.snowActive,
+    ...(c.state.groundSurfaceTemperatureC !== undefined ? { groundSurfaceTemperatureC: c.state.groundSurfaceTemperatureC } : {}),
+    ...(c.state.previousEnthalpyJm3 !== undefined ? { previousEnthalpyJm3: Array.from(c.state.previousEnthalpyJm3) } : {}),
+    ...(c.state.previousStepS !== undefined ? { previousStepS: c.state.previousStepS } : {}),
     prevMinH: c.prevMinH ? Array.from(c.prevMinH) : null,
     prevMaxH: c.prevMaxH ? Array.from(c.prevMaxH) : null,
     prevDailyAirC: c.prevDailyAirC ? Array.from(c.prevDailyAirC) : null,
@@ -295,7 +302,14 @@ export function carryToJson(c: RunCarry): RunCarryJson {
 
 export function carryFromJson(j: RunCarryJson): RunCarry {
   return {
-    state: { enthalpyJm3: Float64Array.from(j.enthalpyJm3), snowTemperatureC: Float64Array.from(j.snowTemperatureC), snowActive: j.snowActive },
+    state: {
+      enthalpyJm3: Float64Array.from(j.enthalpyJm3),
+      snowTemperatureC: Float64Array.from(j.snowTemperatureC),
+      snowActive: j.snowActive,
+      ...(j.groundSurfaceTemperatureC !== undefined ? { groundSurfaceTemperatureC: j.groundSurfaceTemperatureC } : {}),
+      ...(j.previousEnthalpyJm3 !== undefined ? { previousEnthalpyJm3: Float64Array.from(j.previousEnthalpyJm3) } : {}),
+      ...(j.previousStepS !== undefined ? { previousStepS: j.previousStepS } : {}),
+    },
     prevMinH: j.prevMinH ? Float64Array.from(j.prevMinH) : null,
     prevMaxH: j.prevMaxH ? Float64Array.from(j.prevMaxH) : null,
     prevDailyAirC: j.prevDailyAirC ? Float64Array.from(j.prevDailyAirC) : null,
