@@ -19,6 +19,7 @@ function layerDepths<T extends { thickness_m: number }>(layers: T[]): (T & { top
 export default async function GroundProfilePage({ params }: { params: Promise<{ slug: string; profile: string }> }) {
   const { slug, profile } = await params;
   const t = await getTranslations('profile');
+  const to = await getTranslations('outlook');
   const p = await getGroundProfile(slug, profile);
   // Stored versions were validated on write; parsing again gives the defaults and typed values.
   const site = siteSchema.parse(p.site);
@@ -39,6 +40,10 @@ export default async function GroundProfilePage({ params }: { params: Promise<{ 
         <h1 className="text-2xl font-bold">{p.name}</h1>
         <p className="text-sm text-ink-soft">
           {t('versionLine', { version: p.currentVersion, date: p.updatedAt.slice(0, 10) })} · {p.sourceNote}
+        </p>
+        <p className="mt-3">
+          <Link href={`/communities/${p.community.slug}/profiles/${p.slug}/outlook`} className="inline-block rounded bg-frost px-4 py-2 font-bold text-white hover:bg-frost-strong">{to('openLink')}</Link>
+          <span className="ml-3 text-sm text-ink-soft">{to('openLinkHelp')}</span>
         </p>
       </header>
 

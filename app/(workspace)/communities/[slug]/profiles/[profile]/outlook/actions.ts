@@ -1,0 +1,15 @@
+'use server';
+
+import { validatedAction, type ActionResult } from '@/lib/actions';
+import { runOutlookSchema } from '@/lib/outlook/schemas';
+import { runOutlook } from '@/lib/data/outlooks';
+
+/**
+ * Runs the outlook of a ground profile's current version. Planners and admins only: the data layer
+ * checks the role (403) and the organisation (404). The client refreshes the page afterwards, so
+ * nothing here re-renders a page.
+ */
+export const runOutlookAction = validatedAction(runOutlookSchema, async ({ communitySlug, profileSlug }): Promise<ActionResult<{ id: string; reused: boolean }>> => {
+  const { id, reused } = await runOutlook(communitySlug, profileSlug);
+  return { ok: true, message: reused ? 'The stored outlook of these inputs is shown.' : 'The outlook is ready.', data: { id, reused } };
+});

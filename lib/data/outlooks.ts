@@ -1,0 +1,211 @@
+import 'server-only';
+import { and, desc, eq, sql } from 'drizzle-orm';
+import { db, type Tx } from '@/db/client';
+import { communities, groundProfiles, groundProfileVersions, outlooks, users } from '@/db/schema';
+import { ENGINE_VERSION, runAssessment, type AssessOutput } from '@/lib/engine/assess';
+import { outlookInput, outlookInputSha256 } from '@/lib/outlook/input';
+import { outlookResultSchema, type OutlookResult } from '@/lib/outlook/result';
+import { notFoundUnlessOwn, requireActor, ROLES, type Actor } from './session';
+
+/**
+ * Outlooks of ground profiles: the engine's assessment of a profile's current version under every
+ * scenario and the planning horizons 2030, 2050 and 2080, stored once per organisation, input hash
+ * and engine version.
+ *
+ * - `getOutlook`: any member of the organisation; the outlook of the current inputs, else the latest
+ *   one of the profile marked stale (profile version or engine changed), else null.
+ * - `runOutlook`: planners and admins; runs the engine in this process (a few seconds) unless an
+ *   identical outlook (same input hash and engine version) is stored, which is reused.
+ * - `storeOutlook(input, ctx, tx)`: the core write, reusable by jobs and tests.
+ *
+ * The role is checked before the profile is looked up (403 before 404), and another organisation's
+ * profile answers 404 like a missing one (lib/data/session.ts).
+ */
+
+/** Engine options inside the application (TO BE SETTLED under next start). */
+const ENGINE_OPTIONS = {} as const;
+
+export type StaleReason = 'profile_version' | 'engine_version';
+
+export interface OutlookView {
+  id: string;
+  /** Version of the ground profile the outlook was computed for. */
+  profileVersion: number;
+  currentProfileVersion: number;
+  engineVersion: string;
+  currentEngineVersion: string;
+  inputSha256: string;
+  computedAt: string;
+  /** Name (or e-mail) of the member who ran it; null if they were removed since. */
+  computedBy: string | null;
+  scenarios: string[];
+  horizons: number[];
+  /** Empty when the outlook is of the current inputs and engine. */
+  stale: StaleReason[];
+  /** The engine's document; null if a stored document of an older engine cannot be read any more. */
+  result: OutlookResult | null;
+}
+
+interface ProfileRef {
+  organisationId: string;
+  profileId: string;
+  versionId: string;
+  version: number;
+  site: Record<string, unknown>;
+}
+
+/** The profile's current version, or 404 unless it belongs to the actor's organisation. */
+async function findCurrentVersion(actor: Actor, communitySlug: string, profileSlug: string): Promise<ProfileRef> {
+  const [row] = await db
+    .select({
+      organisationId: communities.organisationId,
+      profileId: groundProfiles.id,
+      versionId: groundProfileVersions.id,
+      version: groundProfileVersions.version,
+      site: groundProfileVersions.site,
+    })
+    .from(groundProfiles)
+    .innerJoin(communities, eq(communities.id, groundProfiles.communityId))
+    .innerJoin(groundProfileVersions, and(eq(groundProfileVersions.profileId, groundProfiles.id), eq(groundProfileVersions.version, groundProfiles.currentVersion)))
+    .where(and(eq(communities.slug, communitySlug), eq(groundProfiles.slug, profileSlug)))
+    .limit(1);
+  notFoundUnlessOwn(row?.organisationId, actor);
+  return row!;
+}
+
+const viewColumns = {
+  id: outlooks.id,
+  profileVersionId: outlooks.profileVersionId,
+  profileVersion: groundProfileVersions.version,
+  engineVersion: outlooks.engineVersion,
+  inputSha256: outlooks.inputSha256,
+  scenarios: outlooks.scenarios,
+  horizons: outlooks.horizons,
+  result: outlooks.result,
+  createdAt: outlooks.createdAt,
+  computedByName: users.name,
+  computedByEmail: users.email,
+};
+
+/** The stored outlook for an organisation, input hash and engine version, or null. */
+export async function findOutlookByKey(key: { organisationId: string; inputSha256: string; engineVersion: string }, tx: Tx | typeof db = db) {
+  const [row] = await tx
+    .select({ id: outlooks.id, profileVersionId: outlooks.profileVersionId })
+    .from(outlooks)
+    .where(and(eq(outlooks.organisationId, key.organisationId), eq(outlooks.inputSha256, key.inputSha256), eq(outlooks.engineVersion, key.engineVersion)))
+    .limit(1);
+  return row ?? null;
+}
+
+/**
+ * The outlook of a ground profile as members of its organisation see it (any role).
+ * @returns The outlook of the current version's inputs on the current engine; else the latest
+ *   stored outlook of the profile, marked stale; else null.
+ */
+export async function getOutlook(communitySlug: string, profileSlug: string): Promise<OutlookView | null> {
+  const actor = await requireActor();
+  const p = await findCurrentVersion(actor, communitySlug, profileSlug);
+  const currentHash = outlookInputSha256(outlookInput(p.site));
+  const base = () =>
+    db
+      .select(viewColumns)
+      .from(outlooks)
+      .innerJoin(groundProfileVersions, eq(groundProfileVersions.id, outlooks.profileVersionId))
+      .leftJoin(users, eq(users.id, outlooks.computedByUserId));
+  const [current] = await base()
+    .where(and(eq(outlooks.organisationId, actor.organisationId), eq(outlooks.inputSha256, currentHash), eq(outlooks.engineVersion, ENGINE_VERSION)))
+    .limit(1);
+  const row =
+    current ??
+    (
+      await base()
+        .where(and(eq(outlooks.organisationId, actor.organisationId), eq(groundProfileVersions.profileId, p.profileId)))
+        .orderBy(desc(outlooks.createdAt))
+        .limit(1)
+    )[0];
+  if (!row) return null;
+
+  const stale: StaleReason[] = [];
+  if (row.inputSha256 !== currentHash) stale.push('profile_version');
+  if (row.engineVersion !== ENGINE_VERSION) stale.push('engine_version');
+  const parsed = outlookResultSchema.safeParse(row.result);
+  return {
+    id: row.id,
+    // Identical inputs are the same outlook whichever version first produced them.
+    profileVersion: current ? p.version : row.profileVersion,
+    currentProfileVersion: p.version,
+    engineVersion: row.engineVersion,
+    currentEngineVersion: ENGINE_VERSION,
+    inputSha256: row.inputSha256,
+    computedAt: row.createdAt.toISOString(),
+    computedBy: row.computedByName ?? row.computedByEmail ?? null,
+    scenarios: row.scenarios,
+    horizons: row.horizons,
+    stale,
+    result: parsed.success ? parsed.data : null,
+  };
+}
+
+export interface StoreOutlookInput {
+  profileVersionId: string;
+  scenarios: string[];
+  horizons: number[];
+  /** The engine's output document; its provenance gives the input hash and engine version. */
+  result: Pick<AssessOutput, 'provenance'> & Record<string, unknown>;
+}
+
+export interface OutlookContext {
+  organisationId: string;
+  userId: string | null;
+}
+
+export class OutlookStoreRefused extends Error {}
+
+/**
+ * Stores an outlook, or finds the identical one already stored (same organisation, input hash and
+ * engine version; concurrent runs of the same inputs end with one row).
+ * @returns The row's id and whether it was already there.
+ * Throws OutlookStoreRefused when the profile version is not one of the organisation's.
+ */
+export async function storeOutlook(input: StoreOutlookInput, ctx: OutlookContext, tx: Tx): Promise<{ id: string; reused: boolean }> {
+  const [owner] = await tx
+    .select({ organisationId: communities.organisationId })
+    .from(groundProfileVersions)
+    .innerJoin(groundProfiles, eq(groundProfiles.id, groundProfileVersions.profileId))
+    .innerJoin(communities, eq(communities.id, groundProfiles.communityId))
+    .where(eq(groundProfileVersions.id, input.profileVersionId))
+    .limit(1);
+  if (!owner || owner.organisationId !== ctx.organisationId) throw new OutlookStoreRefused('the profile version is not one of this organisation');
+  const key = { organisationId: ctx.organisationId, inputSha256: input.result.provenance.input_sha256, engineVersion: input.result.provenance.engine_version };
+  const existing = await findOutlookByKey(key, tx);
+  if (existing) return { id: existing.id, reused: true };
+  const id = crypto.randomUUID();
+  await tx
+    .insert(outlooks)
+    .values({ id, profileVersionId: input.profileVersionId, ...key, scenarios: input.scenarios, horizons: input.horizons, result: input.result, computedByUserId: ctx.userId })
+    // Another run of the same inputs got there first: keep its row.
+    .onDuplicateKeyUpdate({ set: { id: sql`${outlooks.id}` } });
+  const stored = await findOutlookByKey(key, tx);
+  return { id: stored!.id, reused: stored!.id !== id };
+}
+
+/**
+ * Runs the outlook of a ground profile's current version (planners and admins) and stores it.
+ * @returns The outlook's id, whether an identical stored one was reused, and the run's time [ms].
+ */
+export async function runOutlook(communitySlug: string, profileSlug: string): Promise<{ id: string; reused: boolean; ms: number }> {
+  const actor = await requireActor(ROLES.planning);
+  const p = await findCurrentVersion(actor, communitySlug, profileSlug);
+  const input = outlookInput(p.site);
+  const key = { organisationId: actor.organisationId, inputSha256: outlookInputSha256(input), engineVersion: ENGINE_VERSION };
+  const existing = await findOutlookByKey(key);
+  if (existing) return { id: existing.id, reused: true, ms: 0 };
+  const t0 = performance.now();
+  const { output, stats } = await runAssessment(input, ENGINE_OPTIONS);
+  const ms = Math.round(performance.now() - t0);
+  console.info(`outlook run ${communitySlug}/${profileSlug} v${p.version}: ${ms} ms, history cache ${stats.cacheHit ? 'hit' : 'miss'}, worker scenarios ${stats.workerScenarios}${stats.workerFallback ? `, worker fallback: ${stats.workerFallback}` : ''}`);
+  const stored = await db.transaction((tx) =>
+    storeOutlook({ profileVersionId: p.versionId, scenarios: [...input.scenarios], horizons: [...input.horizons], result: output }, { organisationId: actor.organisationId, userId: actor.userId }, tx),
+  );
+  return { ...stored, ms };
+}
