@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { invitations, memberships, organisations, users, verificationTokens } from '@/db/schema';
 import { listMessages } from '@/lib/mail-store';
 import { hashPassword } from '@/lib/passwords';
-import { AppClient, forgedToken, MAIL_STORE_DIR, testDb, uniqueAddress } from './helpers/app-client';
+import { AppClient, ensureAppRunning, forgedToken, MAIL_STORE_DIR, testDb, uniqueAddress } from './helpers/app-client';
 
 const { pool, db } = testDb();
 const prefix = `links-${Date.now().toString(36)}`;
@@ -42,6 +42,7 @@ async function memberWithoutPassword(label: string) {
 }
 
 beforeAll(async () => {
+  await ensureAppRunning();
   nivalenId = (await db.select({ id: organisations.id }).from(organisations).where(eq(organisations.slug, 'nivalen-regional-office')))[0].id;
 });
 

@@ -8,7 +8,7 @@ import { and, asc, eq, inArray } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { communities, memberships, organisations, users } from '@/db/schema';
 import { hashPassword } from '@/lib/passwords';
-import { AppClient, testDb } from './helpers/app-client';
+import { AppClient, ensureAppRunning, testDb } from './helpers/app-client';
 
 const { pool, db } = testDb();
 const prefix = `members-${Date.now().toString(36)}`;
@@ -31,6 +31,7 @@ async function tempMember(label: string, organisationId: string, role: 'admin' |
 const action = (client: AppClient, name: string, arg: unknown) => client.action(`${MEMBERS.replace('action ', '')}#${name}`, [arg]);
 
 beforeAll(async () => {
+  await ensureAppRunning();
   const orgs = await db.select({ id: organisations.id, slug: organisations.slug }).from(organisations);
   nivalenId = orgs.find((o) => o.slug === 'nivalen-regional-office')!.id;
   cairnholmId = orgs.find((o) => o.slug === 'cairnholm-hamlet-council')!.id;

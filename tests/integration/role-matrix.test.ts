@@ -18,7 +18,7 @@ import { and, asc, eq, inArray, like } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { communities, groundProfiles, invitations, memberships, organisations, users } from '@/db/schema';
 import { listMessages } from '@/lib/mail-store';
-import { AppClient, BASE_URL, forgedToken, MAIL_STORE_DIR, testDb, uniqueAddress, type Reply } from './helpers/app-client';
+import { AppClient, ensureAppRunning, BASE_URL, forgedToken, MAIL_STORE_DIR, testDb, uniqueAddress, type Reply } from './helpers/app-client';
 
 const ROOT = process.cwd();
 const COLUMNS = ['anonymous', 'admin', 'planner', 'translator', 'council'] as const;
@@ -157,6 +157,7 @@ async function firstCommunity(organisationId: string) {
 }
 
 beforeAll(async () => {
+  await ensureAppRunning();
   fx.own.organisationId = await orgId('nivalen-regional-office');
   fx.other.organisationId = await orgId('cairnholm-hamlet-council');
   Object.assign(fx.own, await firstCommunity(fx.own.organisationId));

@@ -26,6 +26,15 @@ export function testDb() {
   );
 }
 
+/** Fails early with one line when no application answers at E2E_BASE_URL. */
+export async function ensureAppRunning(): Promise<void> {
+  try {
+    await fetch(`${BASE_URL}/api/health`);
+  } catch {
+    throw new Error(`no application answers at ${BASE_URL}: run these tests through npm run test:all, or start the app and set E2E_BASE_URL`);
+  }
+}
+
 export interface Reply {
   status: number;
   /** Redirect target (Location, or a server action's x-action-redirect), as a path with query. */
