@@ -23,7 +23,7 @@ export default async function WorkspacePage({ searchParams }: { searchParams: Pr
         <p className="mt-1">{t(`roleHelp.${actor.role}`)}</p>
         <ul className="mt-3 list-disc space-y-1 pl-6">
           <li>
-            <Link href="/communities" className="text-frost underline">Communities</Link>
+            <Link href="/communities" className="text-frost underline">{t('communities')}</Link>
           </li>
           {actor.role === 'admin' ? (
             <>
