@@ -8,6 +8,12 @@
  * never straddle a reporting time, a year end or (for `daily` surfaces) a day boundary: the step
  * before such an event is shortened to land on it. The surface temperature of a step is taken at
  * its end (consistent with the implicit scheme); a `daily` value holds through its day.
+ *
+ * Annual entries: extremes and time-means over every solver step of the year. `talik` (issue 3's
+ * definition): a layer at least 0.2 m thick that stayed thawed through this year and the previous
+ * one, with ground below it that stayed frozen (so year 1 never has one, and unfrozen ground below
+ * the permafrost base does not count). Added fields: `permafrost_table_m` per year (null if no
+ * ground stayed frozen all year), `time_step_days`, `cell_count`.
  */
 import { z } from 'zod';
 import type { EngineCommand } from './types';
