@@ -1,11 +1,14 @@
 import 'server-only';
-import { and, desc, eq, sql } from 'drizzle-orm';
-import { db, type Tx } from '@/db/client';
+import { and, desc, eq } from 'drizzle-orm';
+import { db } from '@/db/client';
 import { communities, groundProfiles, groundProfileVersions, outlooks, users } from '@/db/schema';
-import { ENGINE_VERSION, runAssessment, type AssessOutput } from '@/lib/engine/assess';
+import { ENGINE_VERSION, runAssessment } from '@/lib/engine/assess';
 import { outlookInput, outlookInputSha256 } from '@/lib/outlook/input';
 import { outlookResultSchema, type OutlookResult } from '@/lib/outlook/result';
+import { findOutlookByKey, storeOutlook } from './outlook-store';
 import { notFoundUnlessOwn, requireActor, ROLES, type Actor } from './session';
+
+export { storeOutlook, OutlookStoreRefused, type OutlookContext, type StoreOutlookInput } from './outlook-store';
 
 /**
  * Outlooks of ground profiles: the engine's assessment of a profile's current version under every
@@ -16,7 +19,7 @@ import { notFoundUnlessOwn, requireActor, ROLES, type Actor } from './session';
  *   one of the profile marked stale (profile version or engine changed), else null.
  * - `runOutlook`: planners and admins; runs the engine in this process (a few seconds) unless an
  *   identical outlook (same input hash and engine version) is stored, which is reused.
- * - `storeOutlook(input, ctx, tx)`: the core write, reusable by jobs and tests.
+ * - `storeOutlook(input, ctx, tx)` (outlook-store.ts): the core write, reusable by jobs and tests.
  *
  * The role is checked before the profile is looked up (403 before 404), and another organisation's
  * profile answers 404 like a missing one (lib/data/session.ts).
@@ -87,16 +90,6 @@ const viewColumns = {
   computedByEmail: users.email,
 };
 
-/** The stored outlook for an organisation, input hash and engine version, or null. */
-export async function findOutlookByKey(key: { organisationId: string; inputSha256: string; engineVersion: string }, tx: Tx | typeof db = db) {
-  const [row] = await tx
-    .select({ id: outlooks.id, profileVersionId: outlooks.profileVersionId })
-    .from(outlooks)
-    .where(and(eq(outlooks.organisationId, key.organisationId), eq(outlooks.inputSha256, key.inputSha256), eq(outlooks.engineVersion, key.engineVersion)))
-    .limit(1);
-  return row ?? null;
-}
-
 /**
  * The outlook of a ground profile as members of its organisation see it (any role).
  * @returns The outlook of the current version's inputs on the current engine; else the latest
@@ -146,49 +139,6 @@ export async function getOutlook(communitySlug: string, profileSlug: string): Pr
   };
 }
 
-export interface StoreOutlookInput {
-  profileVersionId: string;
-  scenarios: string[];
-  horizons: number[];
-  /** The engine's output document; its provenance gives the input hash and engine version. */
-  result: Pick<AssessOutput, 'provenance'> & Record<string, unknown>;
-}
-
-export interface OutlookContext {
-  organisationId: string;
-  userId: string | null;
-}
-
-export class OutlookStoreRefused extends Error {}
-
-/**
- * Stores an outlook, or finds the identical one already stored (same organisation, input hash and
- * engine version; concurrent runs of the same inputs end with one row).
- * @returns The row's id and whether it was already there.
- * Throws OutlookStoreRefused when the profile version is not one of the organisation's.
- */
-export async function storeOutlook(input: StoreOutlookInput, ctx: OutlookContext, tx: Tx): Promise<{ id: string; reused: boolean }> {
-  const [owner] = await tx
-    .select({ organisationId: communities.organisationId })
-    .from(groundProfileVersions)
-    .innerJoin(groundProfiles, eq(groundProfiles.id, groundProfileVersions.profileId))
-    .innerJoin(communities, eq(communities.id, groundProfiles.communityId))
-    .where(eq(groundProfileVersions.id, input.profileVersionId))
-    .limit(1);
-  if (!owner || owner.organisationId !== ctx.organisationId) throw new OutlookStoreRefused('the profile version is not one of this organisation');
-  const key = { organisationId: ctx.organisationId, inputSha256: input.result.provenance.input_sha256, engineVersion: input.result.provenance.engine_version };
-  const existing = await findOutlookByKey(key, tx);
-  if (existing) return { id: existing.id, reused: true };
-  const id = crypto.randomUUID();
-  await tx
-    .insert(outlooks)
-    .values({ id, profileVersionId: input.profileVersionId, ...key, scenarios: input.scenarios, horizons: input.horizons, result: input.result, computedByUserId: ctx.userId })
-    // Another run of the same inputs got there first: keep its row.
-    .onDuplicateKeyUpdate({ set: { id: sql`${outlooks.id}` } });
-  const stored = await findOutlookByKey(key, tx);
-  return { id: stored!.id, reused: stored!.id !== id };
-}
-
 /**
  * Runs the outlook of a ground profile's current version (planners and admins) and stores it.
  * @returns The outlook's id, whether an identical stored one was reused, and the run's time [ms].
@@ -198,7 +148,7 @@ export async function runOutlook(communitySlug: string, profileSlug: string): Pr
   const p = await findCurrentVersion(actor, communitySlug, profileSlug);
   const input = outlookInput(p.site);
   const key = { organisationId: actor.organisationId, inputSha256: outlookInputSha256(input), engineVersion: ENGINE_VERSION };
-  const existing = await findOutlookByKey(key);
+  const existing = await findOutlookByKey(key, db);
   if (existing) return { id: existing.id, reused: true, ms: 0 };
   const t0 = performance.now();
   const { output, stats } = await runAssessment(input, ENGINE_OPTIONS);
