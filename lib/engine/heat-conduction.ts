@@ -579,7 +579,7 @@ export class HeatConductionColumn {
       }
     }
     this.snowActive = withSnow;
-    for (let p = start; p < end; p++) hOld[p] = h[p];
+    for (let p = start; p < SNOW_CELLS; p++) hOld[p] = h[p]; // soil cells: in the predictor pass
 
     const qBase = this.bottomHeatFluxWm2;
     let gTop = 0;
@@ -608,6 +608,7 @@ export class HeatConductionColumn {
     const ratio = this.dtPrevS > 0 ? dtSeconds / this.dtPrevS : 0;
     for (let p = SNOW_CELLS; p <= last; p++) {
       const hn = h[p];
+      hOld[p] = hn;
       const dh = (hn - hPrev[p]) * ratio;
       hPrev[p] = hn;
       if (dh === 0) continue;
