@@ -10,8 +10,8 @@
  *
  * Flow: validate → prepare the column → shared history (calibration, spin-up under the site's
  * 1850–1900 climate, transient 1850–2014; cached by profile hash) → each scenario from 2015 to the
- * end of the last window (split between the main thread and one worker thread when there is more
- * than one scenario; in-process if the worker cannot start) → windows, settlement, hazard,
+ * end of the last window (taken from a shared queue by the main thread and up to two worker threads
+ * when there is more than one scenario; in-process if a worker cannot start) → windows, settlement, hazard,
  * envelopes → output.
  *
  * Definitions of the output (beyond the contract's):
@@ -117,7 +117,8 @@ export interface AssessOptions {
 /**
  * Worker threads beside the main thread: 2. On the 2-core machine three threads share two cores;
  * with five scenarios this finishes in about 2.5 scenario-lengths instead of the 3 of a main + one
- * worker split (whole scenarios cannot be split), at the price of one more worker start-up.
+ * worker split (whole scenarios cannot be split), at the price of one more worker start-up. The
+ * scenarios are taken from a shared queue, so a worker still starting never holds the main thread.
  */
 export const DEFAULT_WORKER_THREADS = 2;
 
@@ -314,34 +315,46 @@ export async function runAssessment(raw: AssessInput | AssessParsed, options: As
   }
   const t1 = performance.now();
 
-  // Scenarios dealt round-robin over the main thread (slot 0) and the workers that started.
+  // Scenarios from a shared queue: the main thread takes one at a time and yields between them, so
+  // that each worker, once it has started (its start-up overlaps the history), takes the next one.
+  // A worker that fails hands its scenario back to the queue and stops (in-process fallback).
   const results = new Map<ScenarioId, YearRecord[]>();
   let workerScenarios = 0;
   let workerFallback: string | null = null;
-  const ready = await workersReady;
-  if (workerCount > 0 && ready < workerCount) workerFallback = assessPoolFailure() ?? 'worker unavailable';
-  const threads = 1 + ready;
-  const share: ScenarioId[][] = Array.from({ length: threads }, () => []);
-  scenarios.forEach((s, i) => share[i % threads].push(s));
+  const queue = [...scenarios];
   const h = history;
-  const jobs = share.slice(1).map((list, w) =>
-    runOnWorker(w, { site, history: { params: h.params, carry2014: h.carry2014 }, scenarios: list, lastYear, permafrostCarbonFeedback: feedback }).then(
-      (r) => ({ list, r }),
-      (e: Error) => {
-        workerFallback = e.message;
-        return { list, r: null };
-      },
-    ),
-  );
-  for (const s of share[0]) results.set(s, runScenario(p, h, s, lastYear));
-  for (const { list, r } of await Promise.all(jobs)) {
-    if (r) {
-      workerScenarios += r.length;
-      for (const x of r) results.set(x.scenario, x.records);
-    } else {
-      for (const s of list) results.set(s, runScenario(p, h, s, lastYear));
-    }
+  const workerJob = { site, history: { params: h.params, carry2014: h.carry2014 }, lastYear, permafrostCarbonFeedback: feedback };
+  const workerLoops =
+    workerCount > 0
+      ? workersReady.then((ready) => {
+          if (ready < workerCount) workerFallback = assessPoolFailure() ?? 'worker unavailable';
+          return Promise.all(
+            Array.from({ length: ready }, async (_, slot) => {
+              while (queue.length > 0) {
+                const s = queue.shift()!;
+                try {
+                  const r = await runOnWorker(slot, { ...workerJob, scenarios: [s] });
+                  results.set(s, r[0].records);
+                  workerScenarios++;
+                } catch (e) {
+                  workerFallback = (e as Error).message;
+                  queue.push(s);
+                  return;
+                }
+              }
+            }),
+          );
+        })
+      : Promise.resolve([]);
+  while (queue.length > 0) {
+    const s = queue.shift()!;
+    results.set(s, runScenario(p, h, s, lastYear));
+    // Let worker replies and readiness through before taking the next scenario.
+    await new Promise<void>((resolve) => setImmediate(resolve));
   }
+  await workerLoops;
+  // Scenarios handed back by a failed worker after the main loop ended.
+  for (const s of queue.splice(0)) results.set(s, runScenario(p, h, s, lastYear));
   const t2 = performance.now();
 
   const output = assembleOutput(input, p, history, results, horizons, key);
