@@ -397,7 +397,7 @@ function runCycleYear(
  * `warmStart`). Acceleration: after each of the first years the annual-mean profile below the
  * seasonal layer (below 1.5 × the thaw depth, at least 3 m) is moved onto the steady conductive
  * line through the annual mean at that depth [6] (the annual wave is kept, only its mean moves);
- * once that correction is below 0.05 K, plain years run until the annual-mean profile changes by
+ * once that correction is below 0.02 K (after at least 3 such years), plain years run until the annual-mean profile changes by
  * less than 0.01 K a year (SPINUP_TOLERANCE_K), bounded by SPINUP_MAX_YEARS.
  * @param column Solver column (its state is the result). @param p Prepared site.
  * @param params Surface parameters. @param monthlyC 12 monthly air temperatures [°C].
@@ -457,7 +457,7 @@ export function spinUp(
       }
       column.setEnthalpy(h);
       accelerated++;
-      if (maxShift < 0.05 || accelerated >= 30) accelerating = false;
+      if ((accelerated >= 3 && maxShift < 0.02) || accelerated >= 30) accelerating = false;
       continue;
     }
     if (change < SPINUP_TOLERANCE_K) return { years, converged: true, maxChangeK: change, acceleratedYears: accelerated };
