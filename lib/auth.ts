@@ -108,7 +108,10 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
         if (!parsed.success) throw new Error('Malformed e-mail address');
         return parsed.data;
       },
-      async sendVerificationRequest({ identifier, url }) {
+      async sendVerificationRequest({ identifier, url: requestUrl }) {
+        // Auth.js builds the link from the request's Host header; a forged Host would mail a working
+        // token pointing at another site. Links always point at the configured APP_URL instead.
+        const url = onAppOrigin(requestUrl);
         await sendMail({
           to: identifier,
           subject: 'Your Thawline sign-in link',
@@ -166,6 +169,15 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
     },
   },
 });
+
+/** The same path and query on the configured APP_URL's origin. */
+export function onAppOrigin(link: string): string {
+  const target = new URL(link);
+  const base = new URL(env.APP_URL);
+  target.protocol = base.protocol;
+  target.host = base.host;
+  return target.toString();
+}
 
 function escapeHtml(s: string): string {
   return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');

@@ -1,6 +1,5 @@
 import 'server-only';
 import { createHash, randomBytes } from 'node:crypto';
-import { headers } from 'next/headers';
 import { and, asc, eq, gt, isNull } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { invitations, memberships, organisations, users, type Role } from '@/db/schema';
@@ -45,15 +44,6 @@ export async function listPendingInvitations(): Promise<PendingInvitationDto[]> 
 
 export type CreateInvitationOutcome = { ok: true } | { ok: false; field?: 'email'; message: string };
 
-/** The origin links in e-mails point to: the request's own (Auth.js trusts the host too), else APP_URL. */
-async function linkOrigin(): Promise<string> {
-  const h = await headers();
-  const host = h.get('x-forwarded-host') ?? h.get('host');
-  if (!host) return env.APP_URL.replace(/\/$/, '');
-  const proto = h.get('x-forwarded-proto') ?? (env.APP_URL.startsWith('https:') ? 'https' : 'http');
-  return `${proto}://${host}`;
-}
-
 /**
  * Invites an address into the active organisation with a role and e-mails a single-use link.
  * Admins only. An earlier open invitation for the same address is revoked, so one link is live.
@@ -81,7 +71,8 @@ export async function createInvitation(input: { email: string; role: Role }): Pr
     await tx.insert(invitations).values({ organisationId: actor.organisationId, email: input.email, role: input.role, tokenSha256: hashToken(token), invitedByUserId: actor.userId, expiresAt });
     await recordAuditEvent({ event: 'invitation.created', organisationId: actor.organisationId, actorUserId: actor.userId, subject: input.email, detail: { role: input.role } }, tx);
   });
-  const url = `${await linkOrigin()}/invite/${token}`;
+  // The configured APP_URL, never the request's Host header (a forged Host must not receive tokens).
+  const url = `${env.APP_URL.replace(/\/$/, '')}/invite/${token}`;
   await sendMail({
     to: input.email,
     subject: `You are invited to ${actor.organisationName} on Thawline`,

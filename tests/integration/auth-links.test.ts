@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { invitations, memberships, organisations, users, verificationTokens } from '@/db/schema';
 import { listMessages } from '@/lib/mail-store';
 import { hashPassword } from '@/lib/passwords';
-import { AppClient, ensureAppRunning, forgedToken, MAIL_STORE_DIR, testDb, uniqueAddress } from './helpers/app-client';
+import { AppClient, BASE_URL, ensureAppRunning, forgedToken, MAIL_STORE_DIR, testDb, uniqueAddress } from './helpers/app-client';
 
 const { pool, db } = testDb();
 const prefix = `links-${Date.now().toString(36)}`;
@@ -100,6 +100,22 @@ describe('e-mail sign-in links', () => {
     const r = await c.get(link);
     expect(r.redirect).toMatch(/^\/sign-in\?error=Verification/);
     expect(c.cookies.has('authjs.session-token')).toBe(false);
+  });
+
+  it('a forged Host does not get a working link pointed at another site', async () => {
+    // Host-header poisoning of reset/sign-in links (OWASP Web Security Testing Guide, WSTG-INPV-17).
+    const email = await memberWithoutPassword('host');
+    const c = new AppClient();
+    const csrfToken = await c.csrfToken();
+    const since = Date.now() - 1000;
+    const r = await c.request('/api/auth/signin/nodemailer', {
+      method: 'POST',
+      headers: { 'content-type': 'application/x-www-form-urlencoded', 'x-forwarded-host': 'attacker.example' },
+      body: new URLSearchParams({ csrfToken, email, callbackUrl: '/workspace' }).toString(),
+    });
+    expect(r.status).toBeLessThan(500);
+    const link = await waitForMail(email, /https?:\/\/\S+\/api\/auth\/callback\/nodemailer\S+/, since);
+    expect(new URL(link).host).toBe(new URL(BASE_URL).host);
   });
 
   it('an unknown address gets the same answer as a known one, and no mail', async () => {
