@@ -346,6 +346,9 @@ export async function runAssessment(raw: AssessInput | AssessParsed, options: As
           );
         })
       : Promise.resolve([]);
+  // Yield once first, so that workers already running take their first scenarios before the main
+  // thread starts its own.
+  await new Promise<void>((resolve) => setImmediate(resolve));
   while (queue.length > 0) {
     const s = queue.shift()!;
     results.set(s, runScenario(p, h, s, lastYear));
