@@ -25,8 +25,14 @@ export { storeOutlook, OutlookStoreRefused, type OutlookContext, type StoreOutlo
  * profile answers 404 like a missing one (lib/data/session.ts).
  */
 
-/** Engine options inside the application (TO BE SETTLED under next start). */
-const ENGINE_OPTIONS = {} as const;
+/**
+ * Engine options inside the application: in-process, no worker thread. The engine's worker is
+ * started through tsx from lib/engine/assess-worker.ts beside the engine's source; inside the
+ * bundle that file is not beside the code and tsx is a development tool, so the application does
+ * not rely on it (the engine would fall back to in-process anyway; see
+ * scripts/turbopack-worker-construct-loader.cjs for the build side). A run takes about 4–5 s.
+ */
+const ENGINE_OPTIONS = { useWorkers: false } as const;
 
 export type StaleReason = 'profile_version' | 'engine_version';
 
