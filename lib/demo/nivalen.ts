@@ -122,11 +122,11 @@ export const demoCommunities: DemoCommunity[] = [
           name: 'Larchbend — riverside silt terrace',
           location: { latitude_deg: 62.71, longitude_deg: -108.94 },
           climate: { monthly_air_temperature_c: [-25.1, -21.6, -13.6, -3.1, 6.9, 13.9, 15.9, 12.4, 4.4, -6.1, -16.1, -23.1], baseline_period: BASELINE },
-          snow: snow(0.55, 210),
-          surface: { cover: 'forest' },
+          snow: snow(0.26, 280),
+          surface: { cover: 'peat' },
           pore_water_salinity_ppt: 0,
           layers: [
-            peat(0.4, 0.7),
+            peat(0.6, 0.75),
             { description: 'silt, active layer', thickness_m: 1.0, texture: 'silt', dry_density_kg_m3: 1350, volumetric_water_content: 0.4, organic_content: 0.03, ice_class: 'Nbn' },
             { description: 'ice-rich silt with ice lenses', thickness_m: 4, texture: 'silt', dry_density_kg_m3: 950, volumetric_water_content: 0.62, ice_class: 'Vs', excess_ice_content: 0.25 },
             { description: 'silty clay', thickness_m: 8, texture: 'clay', dry_density_kg_m3: 1450, volumetric_water_content: 0.42, ice_class: 'Vx', excess_ice_content: 0.05 },
@@ -289,7 +289,7 @@ export const demoCommunities: DemoCommunity[] = [
           surface: { cover: 'bare_soil' },
           pore_water_salinity_ppt: 0,
           layers: [
-            { description: 'stony till', thickness_m: 1.5, texture: 'till', dry_density_kg_m3: 1900, volumetric_water_content: 0.15, ice_class: 'Nbn' },
+            { description: 'stony till', thickness_m: 3, texture: 'till', dry_density_kg_m3: 1850, volumetric_water_content: 0.2, ice_class: 'Nbn' },
             bedrock(50),
           ],
           checklist: { ...CHECKLIST_UNKNOWN, ponding: 'absent', groundwater_flow: 'absent' },
@@ -313,7 +313,7 @@ export const demoCommunities: DemoCommunity[] = [
           name: 'Willowrun — creek-side silt',
           location: { latitude_deg: 64.63, longitude_deg: -113.42 },
           climate: { monthly_air_temperature_c: [-27.3, -23.7, -15.5, -4.8, 5.5, 12.6, 14.7, 11.1, 2.9, -7.8, -18.1, -25.2], baseline_period: BASELINE },
-          snow: snow(0.6, 220),
+          snow: snow(0.25, 300),
           surface: { cover: 'shrub_tundra' },
           pore_water_salinity_ppt: 0,
           layers: [
