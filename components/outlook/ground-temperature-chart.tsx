@@ -64,8 +64,9 @@ export function GroundTemperatureChart({ data, names, labels }: { data: Envelope
               type="number"
               reversed
               domain={[0, data.maxDepthM]}
+              ticks={Array.from({ length: Math.floor(data.maxDepthM / 2.5) + 1 }, (_, i) => i * 2.5)}
               tick={{ fontSize: 11 }}
-              tickFormatter={(v: number) => formatNumber(v, 0, locale)}
+              tickFormatter={(v: number) => formatNumber(v, Number.isInteger(v) ? 0 : 1, locale)}
               label={{ value: labels.depthAxis, angle: -90, position: 'insideLeft', offset: 10, fontSize: 11, style: { textAnchor: 'middle' } }}
               width={56}
             />

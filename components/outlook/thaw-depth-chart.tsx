@@ -25,7 +25,14 @@ export interface ThawDepthChartLabels {
 export function ThawDepthChart({ data, names, labels }: { data: ThawSeries; names: Record<string, string>; labels: ThawDepthChartLabels }) {
   const locale = useLocale();
   const max = Math.max(data.baseline.thawM, ...data.rows.flatMap((r) => data.scenarios.map((s) => r[s] ?? 0)));
-  const bottom = Math.max(0.5, Math.ceil((max * 1.1) / 0.5) * 0.5);
+  // Round depth steps (0.5, 1 or 2 m), the chart's bottom one step below the deepest thaw.
+  const step = max <= 2 ? 0.5 : max <= 6 ? 1 : 2;
+  const bottom = Math.max(step, Math.ceil((max * 1.05) / step) * step);
+  const depthTicks = Array.from({ length: Math.round(bottom / step) + 1 }, (_, i) => i * step);
+  const years = data.rows.map((r) => r.year!);
+  const first = Math.min(...years);
+  const last = Math.max(...years);
+  const yearTicks = Array.from({ length: Math.floor(last / 10) - Math.ceil(first / 10) + 1 }, (_, i) => (Math.ceil(first / 10) + i) * 10);
   return (
     <div>
       <ScenarioLegend scenarios={data.scenarios} names={names} title={labels.legend} baseline={labels.baseline} />
@@ -37,11 +44,12 @@ export function ThawDepthChart({ data, names, labels }: { data: ThawSeries; name
             {data.windows.map((w) => (
               <ReferenceArea key={w.horizon} x1={w.start} x2={w.end} fill="#dbe8f1" fillOpacity={0.7} ifOverflow="hidden" label={{ value: labels.horizons[w.horizon], position: 'insideBottom', fontSize: 11, fill: '#15435f' }} />
             ))}
-            <XAxis dataKey="year" type="number" domain={['dataMin', 'dataMax']} allowDecimals={false} tick={{ fontSize: 11 }} orientation="top" label={{ value: labels.yearAxis, position: 'insideTopRight', offset: -18, fontSize: 11 }} />
+            <XAxis dataKey="year" type="number" domain={[first, last]} ticks={yearTicks} allowDecimals={false} tick={{ fontSize: 11 }} orientation="top" aria-label={labels.yearAxis} />
             <YAxis
               reversed
               type="number"
               domain={[0, bottom]}
+              ticks={depthTicks}
               tick={{ fontSize: 11 }}
               tickFormatter={(v: number) => formatDepth(v, locale)}
               label={{ value: labels.depthAxis, angle: -90, position: 'insideLeft', offset: 10, fontSize: 11, style: { textAnchor: 'middle' } }}

@@ -275,9 +275,9 @@ async function Reasons({ title, scenario, items, t, open }: { title: string; sce
       </summary>
       <dl className="mt-2 space-y-2 text-sm">
         {items.map(({ label, r }) => (
-          <div key={label} className="grid gap-1 sm:grid-cols-[10rem_1fr]">
+          <div key={label} className="grid gap-1 sm:grid-cols-[7rem_1fr]">
             <dt className="flex items-start gap-1.5">
-              <span className="w-16 shrink-0 font-bold">{label}</span>
+              <span className="shrink-0 font-bold">{label}</span>
               <HazardShape level={r.hazard} />
               <span className="sr-only">{t(`rating.${RATING_WORD[r.hazard]}`)}</span>
             </dt>
@@ -314,6 +314,9 @@ function NotModelled({ result, t }: { result: OutlookResult; t: T }) {
   );
 }
 
+const CELL = 'px-2 py-1';
+const HEAD = 'px-2 py-1 font-normal leading-tight';
+
 function ResultsTable({ result, scenarios, horizons, titles, locale, t }: { result: OutlookResult; scenarios: OutlookScenario[]; horizons: number[]; titles: Record<string, string>; locale: string; t: T }) {
   const base = result.baseline;
   const depth = formatNumber(base.ground_temperature_depth_m, 0, locale);
@@ -324,15 +327,15 @@ function ResultsTable({ result, scenarios, horizons, titles, locale, t }: { resu
   const talik = (r: WindowResult | BaselineResult) => (r.talik ? (r.talik_onset_year ? t('cell.talikFrom', { year: r.talik_onset_year }) : t('cell.talikYes')) : t('cell.talikNo'));
   const cells = (r: WindowResult | BaselineResult) => (
     <>
-      <td>{formatTemperature(r.air_temperature_c, locale)}</td>
-      <td>{formatIndex(r.thawing_index_c_days, locale)}</td>
-      <td>{formatIndex(r.freezing_index_c_days, locale)}</td>
-      <td>{formatDepth(r.seasonal_thaw_m, locale)}</td>
-      <td>{r.permafrost_table_m === null ? t('cell.noPermafrost') : formatDepth(r.permafrost_table_m, locale)}</td>
-      <td>{formatTemperature(r.ground_temperature_c, locale)}</td>
-      <td>{talik(r)}</td>
-      <td>{settlement(r.settlement_m)}</td>
-      <td className="text-left">
+      <td className={CELL}>{formatTemperature(r.air_temperature_c, locale)}</td>
+      <td className={CELL}>{formatIndex(r.thawing_index_c_days, locale)}</td>
+      <td className={CELL}>{formatIndex(r.freezing_index_c_days, locale)}</td>
+      <td className={CELL}>{formatDepth(r.seasonal_thaw_m, locale)}</td>
+      <td className={CELL}>{r.permafrost_table_m === null ? t('cell.noPermafrost') : formatDepth(r.permafrost_table_m, locale)}</td>
+      <td className={CELL}>{formatTemperature(r.ground_temperature_c, locale)}</td>
+      <td className={CELL}>{talik(r)}</td>
+      <td className={CELL}>{settlement(r.settlement_m)}</td>
+      <td className={`${CELL} pl-4 text-left`}>
         <span className="inline-flex items-center gap-1.5 whitespace-nowrap"><HazardShape level={r.hazard} size={12} />{t(`rating.short.${RATING_WORD[r.hazard]}`)}</span>
       </td>
     </>
@@ -345,23 +348,23 @@ function ResultsTable({ result, scenarios, horizons, titles, locale, t }: { resu
         <table className="w-full min-w-[960px] text-right text-sm">
           <thead className="border-b border-snow-300 align-bottom text-ink-soft">
             <tr>
-              <th scope="col" className="py-1 text-left font-normal">{t('col.scenario')}</th>
-              <th scope="col" className="text-left font-normal">{t('col.window')}</th>
-              <th scope="col" className="font-normal">{t('col.air')}</th>
-              <th scope="col" className="font-normal">{t('col.thawingIndex')}</th>
-              <th scope="col" className="font-normal">{t('col.freezingIndex')}</th>
-              <th scope="col" className="font-normal">{t('col.thaw')}</th>
-              <th scope="col" className="font-normal">{t('col.table')}</th>
-              <th scope="col" className="font-normal">{t('col.ground', { depth })}</th>
-              <th scope="col" className="font-normal">{t('col.talik')}</th>
-              <th scope="col" className="font-normal">{t('col.settlement')}</th>
-              <th scope="col" className="pl-3 text-left font-normal">{t('col.rating')}</th>
+              <th scope="col" className={`${HEAD} pl-0 text-left`}>{t('col.scenario')}</th>
+              <th scope="col" className={`${HEAD} text-left`}>{t('col.window')}</th>
+              <th scope="col" className={HEAD}>{t('col.air')}</th>
+              <th scope="col" className={HEAD}>{t('col.thawingIndex')}</th>
+              <th scope="col" className={HEAD}>{t('col.freezingIndex')}</th>
+              <th scope="col" className={HEAD}>{t('col.thaw')}</th>
+              <th scope="col" className={HEAD}>{t('col.table')}</th>
+              <th scope="col" className={HEAD}>{t('col.ground', { depth })}</th>
+              <th scope="col" className={HEAD}>{t('col.talik')}</th>
+              <th scope="col" className={HEAD}>{t('col.settlement')}</th>
+              <th scope="col" className={`${HEAD} pl-4 text-left`}>{t('col.rating')}</th>
             </tr>
           </thead>
           <tbody>
             <tr className="border-b-2 border-snow-300 bg-snow-100">
               <th scope="row" className="py-1 text-left font-normal"><span className="inline-flex items-center gap-2"><ScenarioLine scenario="baseline" width={24} />{t('baselineReference', { start: base.period[0], end: base.period[1] })}</span></th>
-              <td className="text-left">{`${base.window[0]}\u2013${base.window[1]}`}</td>
+              <td className={`${CELL} text-left`}>{`${base.window[0]}\u2013${base.window[1]}`}</td>
               {cells(base)}
             </tr>
             {scenarios.flatMap((s) =>
@@ -375,7 +378,7 @@ function ResultsTable({ result, scenarios, horizons, titles, locale, t }: { resu
                         <span className="inline-flex items-center gap-2"><ScenarioLine scenario={s} width={24} />{titles[s]}</span>
                       </th>
                     ) : null}
-                    <td className="py-1 text-left">{t('horizonWindow', { horizon: h, start: r.window[0], end: r.window[1] })}</td>
+                    <td className={`${CELL} whitespace-nowrap text-left`}>{t('horizonWindow', { horizon: h, start: r.window[0], end: r.window[1] })}</td>
                     {cells(r)}
                   </tr>
                 );
