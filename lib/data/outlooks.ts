@@ -2,7 +2,9 @@ import 'server-only';
 import { and, desc, eq } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { communities, groundProfiles, groundProfileVersions, outlooks, users } from '@/db/schema';
+import { z } from 'zod';
 import { ENGINE_VERSION, runAssessment } from '@/lib/engine/assess';
+import { formatIssues } from '@/lib/engine/validation';
 import { outlookInput, outlookInputSha256 } from '@/lib/outlook/input';
 import { outlookResultSchema, type OutlookResult } from '@/lib/outlook/result';
 import { findOutlookByKey, storeOutlook } from './outlook-store';
@@ -104,7 +106,13 @@ const viewColumns = {
 export async function getOutlook(communitySlug: string, profileSlug: string): Promise<OutlookView | null> {
   const actor = await requireActor();
   const p = await findCurrentVersion(actor, communitySlug, profileSlug);
-  const currentHash = outlookInputSha256(outlookInput(p.site));
+  // A stored site the current engine no longer accepts has no current outlook (a run says why).
+  let currentHash = '';
+  try {
+    currentHash = outlookInputSha256(outlookInput(p.site));
+  } catch (e) {
+    if (!(e instanceof z.ZodError)) throw e;
+  }
   const base = () =>
     db
       .select(viewColumns)
@@ -145,15 +153,26 @@ export async function getOutlook(communitySlug: string, profileSlug: string): Pr
   };
 }
 
+/** The profile's stored inputs do not pass the engine's checks; the message lists `path: problem`. */
+export class OutlookInputRefused extends Error {}
+
 /**
  * Runs the outlook of a ground profile's current version (planners and admins) and stores it.
  * @returns The outlook's id, whether an identical stored one was reused, and the run's time [ms].
+ * Throws OutlookInputRefused when the stored inputs do not pass the engine's checks.
  */
 export async function runOutlook(communitySlug: string, profileSlug: string): Promise<{ id: string; reused: boolean; ms: number }> {
   const actor = await requireActor(ROLES.planning);
   const p = await findCurrentVersion(actor, communitySlug, profileSlug);
   const input = outlookInput(p.site);
-  const key = { organisationId: actor.organisationId, inputSha256: outlookInputSha256(input), engineVersion: ENGINE_VERSION };
+  let inputSha256: string;
+  try {
+    inputSha256 = outlookInputSha256(input);
+  } catch (e) {
+    if (e instanceof z.ZodError) throw new OutlookInputRefused(formatIssues(e).join('; '));
+    throw e;
+  }
+  const key = { organisationId: actor.organisationId, inputSha256, engineVersion: ENGINE_VERSION };
   const existing = await findOutlookByKey(key, db);
   if (existing) return { id: existing.id, reused: true, ms: 0 };
   const t0 = performance.now();

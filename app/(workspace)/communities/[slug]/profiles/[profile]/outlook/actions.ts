@@ -1,8 +1,8 @@
 'use server';
 
-import { validatedAction, type ActionResult } from '@/lib/actions';
+import { failure, validatedAction, type ActionResult } from '@/lib/actions';
 import { runOutlookSchema } from '@/lib/outlook/schemas';
-import { runOutlook } from '@/lib/data/outlooks';
+import { OutlookInputRefused, runOutlook } from '@/lib/data/outlooks';
 
 /**
  * Runs the outlook of a ground profile's current version. Planners and admins only: the data layer
@@ -10,6 +10,13 @@ import { runOutlook } from '@/lib/data/outlooks';
  * nothing here re-renders a page.
  */
 export const runOutlookAction = validatedAction(runOutlookSchema, async ({ communitySlug, profileSlug }): Promise<ActionResult<{ id: string; reused: boolean }>> => {
-  const { id, reused } = await runOutlook(communitySlug, profileSlug);
+  let outcome: Awaited<ReturnType<typeof runOutlook>>;
+  try {
+    outcome = await runOutlook(communitySlug, profileSlug);
+  } catch (e) {
+    if (e instanceof OutlookInputRefused) return failure(`The ground profile's inputs do not pass the engine's checks: ${e.message}`);
+    throw e;
+  }
+  const { id, reused } = outcome;
   return { ok: true, message: reused ? 'The stored outlook of these inputs is shown.' : 'The outlook is ready.', data: { id, reused } };
 });
