@@ -1,7 +1,7 @@
 import nextConfig from 'eslint-config-next';
 
 const config = [
-  { ignores: ['node_modules/**', '.next/**', '.next-test/**', '.data/**', '.tmp/**', 'drizzle/**', 'public/**', 'test-results/**', 'playwright-report/**', 'next-env.d.ts'] },
+  { ignores: ['node_modules/**', '.next*/**', '.data/**', '.tmp/**', 'drizzle/**', 'public/**', 'test-results/**', 'playwright-report/**', 'next-env.d.ts'] },
   ...nextConfig,
 ];
 
