@@ -260,3 +260,35 @@ describe('rate limits', () => {
     expect(blocked.body).toContain('Too many attempts');
   });
 });
+
+describe('headers and cookies as served', () => {
+  it('every page carries the Content-Security-Policy that lets the map workers run', async () => {
+    for (const p of ['/', '/sign-in', '/api/health']) {
+      const r = await new AppClient().get(p);
+      const csp = r.headers.get('content-security-policy') ?? '';
+      expect(csp, p).toContain("worker-src 'self' blob:");
+      expect(csp, p).toContain("frame-ancestors 'none'");
+      expect(r.headers.get('x-content-type-options'), p).toBe('nosniff');
+    }
+  });
+
+  it('the session cookie is HttpOnly and SameSite=Lax, and Secure with the __Secure- prefix over https', async () => {
+    // Cookie attributes: RFC 6265 §4.1.2; name prefixes: RFC 6265bis §4.1.3.
+    const c = new AppClient();
+    const csrfToken = await c.csrfToken();
+    const res = await fetch(`${BASE_URL}/api/auth/callback/password`, {
+      method: 'POST',
+      redirect: 'manual',
+      headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: c.cookieHeader() },
+      body: new URLSearchParams({ csrfToken, email: 'council@nivalen.example', password: 'thawline-demo' }).toString(),
+    });
+    const session = res.headers.getSetCookie().find((l) => l.startsWith('authjs.session-token='));
+    expect(session).toMatch(/; HttpOnly/);
+    expect(session).toMatch(/; SameSite=Lax/);
+    const overHttps = await fetch(`${BASE_URL}/api/auth/csrf`, { headers: { 'x-forwarded-proto': 'https' } });
+    for (const line of overHttps.headers.getSetCookie()) {
+      expect(line).toMatch(/^__(Host|Secure)-authjs\./);
+      expect(line).toMatch(/; Secure/);
+    }
+  });
+});
