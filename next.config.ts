@@ -11,10 +11,6 @@ const nextConfig: NextConfig = {
   distDir: env.NEXT_DIST_DIR,
   // forbidden() answers 403 from the data layer (lib/data/session.ts).
   experimental: { authInterrupts: true },
-  // The engine's worker pool computes its worker's path at run time; see the loader's comment.
-  turbopack: {
-    rules: { 'assess-pool.ts': { loaders: ['./scripts/turbopack-worker-construct-loader.cjs'], as: '*.ts' } },
-  },
   async headers() {
     return [{ source: '/:path*', headers: securityHeaders(env.NODE_ENV === 'development') }];
   },

@@ -10,7 +10,7 @@
  */
 import { runAssessment } from '../lib/engine/assess';
 import { HistoryCache } from '../lib/engine/assess-cache';
-import { closeAssessPool } from '../lib/engine/assess-pool';
+import { assessWorkerPool, closeAssessPool } from '../lib/engine/assess-pool';
 import { measureNodeStepsPerSecond } from '../lib/engine/heat-conduction-bench';
 import { SCENARIOS } from '../lib/engine/scenario-forcing';
 import { exampleSite } from '../lib/engine/site-schema';
@@ -22,10 +22,10 @@ async function main() {
   const cache = new HistoryCache();
 
   let t0 = performance.now();
-  const cold = await runAssessment(input, { cache });
+  const cold = await runAssessment(input, { cache, workers: assessWorkerPool });
   const coldS = (performance.now() - t0) / 1000;
   t0 = performance.now();
-  const cached = await runAssessment(input, { cache });
+  const cached = await runAssessment(input, { cache, workers: assessWorkerPool });
   const cachedS = (performance.now() - t0) / 1000;
   await closeAssessPool();
   if (cold.stats.cacheHit || !cached.stats.cacheHit) throw new Error('bench: unexpected cache state');

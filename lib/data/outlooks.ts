@@ -28,13 +28,11 @@ export { storeOutlook, OutlookStoreRefused, type OutlookContext, type StoreOutlo
  */
 
 /**
- * Engine options inside the application: in-process, no worker thread. The engine's worker is
- * started through tsx from lib/engine/assess-worker.ts beside the engine's source; inside the
- * bundle that file is not beside the code and tsx is a development tool, so the application does
- * not rely on it (the engine would fall back to in-process anyway; see
- * scripts/turbopack-worker-construct-loader.cjs for the build side). A run takes about 4–5 s.
+ * Engine options inside the application: in-process (no `workers` pool is passed, so the engine's
+ * thread pool, lib/engine/assess-pool.ts, is not even in the bundle; its worker starts through tsx
+ * beside the engine's source, which a bundle does not have). A run takes a few seconds.
  */
-const ENGINE_OPTIONS = { useWorkers: false } as const;
+const ENGINE_OPTIONS = {} as const;
 
 export type StaleReason = 'profile_version' | 'engine_version';
 

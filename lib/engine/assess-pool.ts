@@ -13,12 +13,14 @@
  *
  * API: `startAssessWorkers(count)` → promise of the number of workers ready (idempotent, grows the
  * pool up to `count`), `runOnWorker(slot, job)` → results or throws, `assessPoolFailure()`,
- * `closeAssessPool()`.
+ * `closeAssessPool()`; `assessWorkerPool` bundles the first three as the `workers` option of
+ * `runAssessment` (assess.ts does not import this module: callers that want threads pass it in).
  */
 import fs from 'node:fs';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
 import type { WorkerJob } from './assess-worker';
+import type { ScenarioWorkerPool } from './assess';
 import type { YearRecord } from './site-model';
 import type { ScenarioId } from './scenario-forcing';
 
@@ -132,3 +134,10 @@ export async function closeAssessPool(): Promise<void> {
   const all = slots.splice(0, slots.length);
   await Promise.all(all.map((s) => (s.worker ? s.worker.terminate() : Promise.resolve(0))));
 }
+
+/** The thread pool as `runAssessment`'s `workers` option. */
+export const assessWorkerPool: ScenarioWorkerPool = {
+  start: startAssessWorkers,
+  run: runOnWorker,
+  failure: assessPoolFailure,
+};

@@ -9,7 +9,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { profileHash, runAssessment, type AssessOutput } from './assess';
 import { HistoryCache } from './assess-cache';
-import { closeAssessPool } from './assess-pool';
+import { assessWorkerPool, closeAssessPool } from './assess-pool';
 import { SPINUP_TOLERANCE_K } from './constants';
 import { globalWarmingMean } from './global-warming';
 import { SCENARIOS } from './scenario-forcing';
@@ -30,7 +30,7 @@ describe('assessment: five scenarios, three horizons', () => {
   let out: AssessOutput;
   let stats: Awaited<ReturnType<typeof runAssessment>>['stats'];
   beforeAll(async () => {
-    const r = await runAssessment({ site: site(), scenarios: [...SCENARIOS], horizons: [2030, 2050, 2080] }, { cache });
+    const r = await runAssessment({ site: site(), scenarios: [...SCENARIOS], horizons: [2030, 2050, 2080] }, { cache, workers: assessWorkerPool });
     out = r.output;
     stats = r.stats;
   });

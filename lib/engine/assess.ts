@@ -32,7 +32,6 @@ import canonicalize from 'canonicalize';
 import { z } from 'zod';
 import { summarizeAirIndices } from './air-indices';
 import { defaultHistoryCache, type HistoryCache } from './assess-cache';
-import { assessPoolFailure, runOnWorker, startAssessWorkers } from './assess-pool';
 import { TRANSITION_ZONE_THICKNESS_M } from './constants';
 import { meanStrainBetween, thawStrainProfile, type StrainInterval } from './ground-ice';
 import { rateHazard, type HazardRating } from './hazard';
@@ -105,10 +104,36 @@ export const SOURCES: readonly string[] = Object.freeze([
   'Input hash: RFC 8785 JSON canonicalization, SHA-256',
 ]);
 
+/**
+ * Worker threads that can run scenarios beside the main thread. The thread pool itself lives in
+ * assess-pool.ts (`assessWorkerPool`) and is passed in by callers that want it (the CLI, the bench,
+ * tests), so that this module's import graph holds no worker code: a bundler (the web application's)
+ * never meets a `new Worker(...)` it would try to bundle, and the application runs in-process.
+ */
+export interface ScenarioWorkerPool {
+  /** Grows the pool to `count` workers; resolves with how many are ready. */
+  start(count: number): Promise<number>;
+  /** Runs one job on worker `slot`; rejects if that worker is unavailable or fails. */
+  run(slot: number, job: WorkerJobInput): Promise<{ scenario: ScenarioId; records: YearRecord[] }[]>;
+  /** Why a worker could not start, if one could not. */
+  failure(): string | null;
+}
+
+/** What a worker needs to run scenarios from a shared history (see assess-worker.ts). */
+export interface WorkerJobInput {
+  site: Site;
+  history: Pick<SiteHistory, 'params' | 'carry2014'>;
+  lastYear: number;
+  permafrostCarbonFeedback: boolean;
+  scenarios: ScenarioId[];
+}
+
 export interface AssessOptions {
   /** History cache (default: the process-wide memory cache). Pass `null` for none. */
   cache?: HistoryCache | null;
-  /** Use worker threads for part of the scenarios when there is more than one (default true). */
+  /** Worker threads for part of the scenarios when there is more than one (default: none, in-process). */
+  workers?: ScenarioWorkerPool;
+  /** Set false to run in-process even when a pool is given. */
   useWorkers?: boolean;
   /** Number of worker threads beside the main thread (default DEFAULT_WORKER_THREADS). */
   workerThreads?: number;
@@ -300,9 +325,10 @@ export async function runAssessment(raw: AssessInput | AssessParsed, options: As
   const scenarios = input.scenarios as ScenarioId[];
   const horizons = [...input.horizons].sort((a, b) => a - b);
   const lastYear = horizons[horizons.length - 1] + 10;
-  const workerCount = options.useWorkers === false ? 0 : Math.min(options.workerThreads ?? DEFAULT_WORKER_THREADS, scenarios.length - 1);
+  const pool = options.useWorkers === false ? undefined : options.workers;
+  const workerCount = pool ? Math.min(options.workerThreads ?? DEFAULT_WORKER_THREADS, scenarios.length - 1) : 0;
   // Start the workers first, so their start-up overlaps the history on the main thread.
-  const workersReady = workerCount > 0 ? startAssessWorkers(workerCount) : Promise.resolve(0);
+  const workersReady = pool && workerCount > 0 ? pool.start(workerCount) : Promise.resolve(0);
 
   const p = prepareSite(site, { permafrostCarbonFeedback: feedback });
   const key = profileHash(site, feedback);
@@ -327,13 +353,13 @@ export async function runAssessment(raw: AssessInput | AssessParsed, options: As
   const workerLoops =
     workerCount > 0
       ? workersReady.then((ready) => {
-          if (ready < workerCount) workerFallback = assessPoolFailure() ?? 'worker unavailable';
+          if (ready < workerCount) workerFallback = pool!.failure() ?? 'worker unavailable';
           return Promise.all(
             Array.from({ length: ready }, async (_, slot) => {
               while (queue.length > 0) {
                 const s = queue.shift()!;
                 try {
-                  const r = await runOnWorker(slot, { ...workerJob, scenarios: [s] });
+                  const r = await pool!.run(slot, { ...workerJob, scenarios: [s] });
                   results.set(s, r[0].records);
                   workerScenarios++;
                 } catch (e) {

@@ -3,12 +3,14 @@
  * planning horizons. Input schema and run: lib/engine/assess.ts.
  */
 import { assessInputSchema, runAssessment } from '../assess';
+import { assessWorkerPool } from '../assess-pool';
 import type { EngineCommand } from './types';
 
 export const assessCommand: EngineCommand<typeof assessInputSchema> = {
   schema: assessInputSchema,
   async run(input) {
-    const { output } = await runAssessment(input);
+    // The CLI runs scenarios on worker threads beside the main thread (both cores).
+    const { output } = await runAssessment(input, { workers: assessWorkerPool });
     return output;
   },
 };
