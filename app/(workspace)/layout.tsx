@@ -20,6 +20,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
           <Link href="/workspace" className="text-lg font-bold text-frost-strong">Thawline</Link>
           <nav aria-label={t('nav')} className="flex items-center gap-4 text-sm">
             <Link href="/workspace" className="hover:underline">{t('title')}</Link>
+            <Link href="/communities" className="hover:underline">{t('communities')}</Link>
             {actor.role === 'admin' ? (
               <>
                 <Link href="/admin/members" className="hover:underline">{t('members')}</Link>

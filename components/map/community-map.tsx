@@ -1,7 +1,7 @@
 'use client';
 
 import { useMemo, useState } from 'react';
-import Map, { Layer, Marker, NavigationControl, Source, type ViewState } from 'react-map-gl/maplibre';
+import Map, { Layer, Marker, NavigationControl, Source } from 'react-map-gl/maplibre';
 import { setWorkerUrl } from 'maplibre-gl';
 import type { StyleSpecification } from 'maplibre-gl';
 import 'maplibre-gl/dist/maplibre-gl.css';
@@ -26,15 +26,19 @@ const style: StyleSpecification = {
   layers: [{ id: 'sea', type: 'background', paint: { 'background-color': '#dbe8f1' } }],
 };
 
-function initialView(points: MapCommunity[]): Partial<ViewState> {
+/** The view that shows every community with room for its label (fitted by the map on load). */
+function initialView(points: MapCommunity[]) {
   if (points.length === 0) return { longitude: -110, latitude: 66, zoom: 2.5 };
   const lons = points.map((p) => p.longitudeDeg);
   const lats = points.map((p) => p.latitudeDeg);
-  const span = Math.max(Math.max(...lons) - Math.min(...lons), (Math.max(...lats) - Math.min(...lats)) * 2, 1);
+  if (points.length === 1) return { longitude: lons[0]!, latitude: lats[0]!, zoom: 6 };
   return {
-    longitude: (Math.max(...lons) + Math.min(...lons)) / 2,
-    latitude: (Math.max(...lats) + Math.min(...lats)) / 2,
-    zoom: Math.max(1.5, Math.min(8, Math.log2(360 / span) - 0.6)),
+    bounds: [
+      [Math.min(...lons), Math.min(...lats)],
+      [Math.max(...lons), Math.max(...lats)],
+    ] as [[number, number], [number, number]],
+    // Labels sit to the right of their marker: leave more room on that side.
+    fitBoundsOptions: { padding: { top: 50, bottom: 50, left: 50, right: 130 }, maxZoom: 8 },
   };
 }
 

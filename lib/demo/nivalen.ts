@@ -174,7 +174,7 @@ export const demoCommunities: DemoCommunity[] = [
           name: 'Sedgehaven — peat plateau',
           location: { latitude_deg: 63.92, longitude_deg: -104.18 },
           climate: { monthly_air_temperature_c: [-29.1, -25.5, -17.1, -6.1, 4.4, 11.8, 13.9, 10.3, 1.9, -9.1, -19.6, -27.0], baseline_period: BASELINE },
-          snow: snow(0.4, 260),
+          snow: snow(0.3, 300),
           surface: { cover: 'peat' },
           pore_water_salinity_ppt: 0,
           layers: [

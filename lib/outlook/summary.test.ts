@@ -116,6 +116,21 @@ describe('plain-language summary', () => {
     expect(text(result(twoHorizons({ seasonal_thaw_m: 0.8 })))).toContain('some 0.2 m less deep than in 1991–2020');
   });
 
+  it('does not read a permafrost that thawed through as a shallower summer thaw', () => {
+    // Once no permafrost is left, the yearly thaw is only last winter's frost (engine contract): comparing
+    // it with the baseline active layer would tell residents the thaw got smaller.
+    const s = text(result(twoHorizons({ seasonal_thaw_m: 0.4, hazard: 'high', hazard_reasons: ['permafrost_thawed_through'] })));
+    expect(s).toContain('by the 2050s the permafrost in the modelled ground could thaw all the way through');
+    expect(s).not.toContain('less deep');
+    expect(s.match(/thaw all the way through/g)).toHaveLength(1);
+  });
+
+  it('with a talik, names the depth of the permafrost table, not only the summer thaw', () => {
+    const s = text(result(twoHorizons({ seasonal_thaw_m: 0.6, permafrost_table_m: 3.2, talik: true, talik_onset_year: 2044, hazard: 'high', hazard_reasons: ['talik'] })));
+    expect(s).toContain('the top of the permafrost could lie about 3.2 m down');
+    expect(s).not.toContain('less deep');
+  });
+
   it('speaks of intermediate emissions when run, else of the middle scenario run', () => {
     const all = ['SSP1-1.9', 'SSP1-2.6', 'SSP2-4.5', 'SSP3-7.0', 'SSP5-8.5'].map((scenario) => ({ scenario }));
     expect(summaryScenario(result(all))).toBe('SSP2-4.5');
@@ -127,6 +142,8 @@ describe('plain-language summary', () => {
       result(twoHorizons()),
       result(twoHorizons({ seasonal_thaw_m: 1.0 }, { talik: true, talik_onset_year: null, ground_temperature_c: 0.4, settlement_m: 0.02, hazard: 'high', hazard_reasons: ['permafrost_thawed_through'] })),
       result(twoHorizons(), { hazard_reasons: ['no_permafrost_modelled'], permafrost_table_m: null }),
+      result(twoHorizons({ hazard: 'high', hazard_reasons: ['permafrost_thawed_through'] })),
+      result(twoHorizons({ permafrost_table_m: 3.2, talik: true, talik_onset_year: 2044, hazard: 'high', hazard_reasons: ['talik'] })),
     ];
     for (const l of Object.keys(MESSAGES) as (keyof typeof MESSAGES)[]) {
       for (const c of cases) expect(text(c, l).length).toBeGreaterThan(80);

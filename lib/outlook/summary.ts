@@ -10,6 +10,8 @@
  *
  * What it says, in order:
  *  1. the summer thaw by the first horizon at or after 2050 (else the last one), against the baseline;
+ *     where the permafrost has thawed through by then, that instead; with a talik, the depth to the
+ *     permafrost table beside it (the summer thaw then stops at last winter's frost);
  *  2. the summer thaw by the last horizon, when that is later;
  *  3. the active layer named once and explained;
  *  4. settlement by the end of the last window, kept apart from "deeper thaw" (a deeper thaw is not
@@ -66,9 +68,25 @@ export function buildSummary(result: OutlookResult, locale: string, scenarioName
   if (noPermafrost) {
     sentences.push({ key: 'noPermafrost', values: { baseline } });
   } else {
-    sentences.push(thawSentence(first, base.seasonal_thaw_m, name, baseline, locale));
-    if (last.horizon !== first.horizon) {
-      sentences.push({ key: 'thawLater', values: { horizon: last.horizon, depth: formatDepth(last.seasonal_thaw_m, locale) } });
+    const thawedThrough = rows.find((r) => r.hazard_reasons.includes('permafrost_thawed_through'));
+    const baseDepth = formatDepth(base.seasonal_thaw_m, locale);
+    if (thawedThrough && thawedThrough.horizon <= first.horizon) {
+      // With no permafrost left, the "summer thaw" is only last winter's frost thawing again: comparing
+      // it with the baseline active layer would read as less thaw. Say what happened instead.
+      sentences.push({ key: 'thawedThroughLead', values: { scenario: name, horizon: thawedThrough.horizon, baseline, depth: baseDepth } });
+    } else {
+      if (first.talik && first.permafrost_table_m !== null) {
+        // With a talik the summer thaw stops at last winter's frost; the permafrost table lies deeper.
+        sentences.push({
+          key: 'thawTalik',
+          values: { scenario: name, horizon: first.horizon, table: formatDepth(first.permafrost_table_m, locale), baseline, depth: baseDepth },
+        });
+      } else {
+        sentences.push(thawSentence(first, base.seasonal_thaw_m, name, baseline, locale));
+      }
+      if (last.horizon !== first.horizon && !last.hazard_reasons.includes('permafrost_thawed_through') && !last.talik) {
+        sentences.push({ key: 'thawLater', values: { horizon: last.horizon, depth: formatDepth(last.seasonal_thaw_m, locale) } });
+      }
     }
     sentences.push({ key: 'activeLayer', values: {} });
 
@@ -90,13 +108,12 @@ export function buildSummary(result: OutlookResult, locale: string, scenarioName
       },
     });
 
-    const thawedThrough = rows.find((r) => r.hazard_reasons.includes('permafrost_thawed_through'));
     const talik = rows.find((r) => r.talik);
     if (talik) {
       const onset = talik.talik_onset_year;
       sentences.push(onset !== null ? { key: 'talik', values: { year: onset } } : { key: 'talikWindow', values: { horizon: talik.horizon } });
     }
-    if (thawedThrough) sentences.push({ key: 'thawedThrough', values: { horizon: thawedThrough.horizon } });
+    if (thawedThrough && thawedThrough.horizon > first.horizon) sentences.push({ key: 'thawedThrough', values: { horizon: thawedThrough.horizon } });
   }
 
   sentences.push({ key: 'rating', values: { horizon: last.horizon, rating: ratingKey[last.hazard] } });
