@@ -62,7 +62,8 @@ export function GroundTemperatureChart({ data, names, labels }: { data: Envelope
             <YAxis
               dataKey="depth"
               type="number"
-              reversed
+              // In recharts' vertical layout a number Y axis already runs from the top down: depth
+              // increases downward without \`reversed\` (which would put the surface at the bottom).
               domain={[0, data.maxDepthM]}
               ticks={Array.from({ length: Math.floor(data.maxDepthM / 2.5) + 1 }, (_, i) => i * 2.5)}
               tick={{ fontSize: 11 }}
