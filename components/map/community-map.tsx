@@ -47,8 +47,8 @@ export function CommunityMap({ communities, selected, label }: { communities: Ma
   const [hover, setHover] = useState<string | null>(null);
   return (
     <div className="h-[420px] w-full overflow-hidden rounded border border-snow-300" role="region" aria-label={label}>
-      <Map initialViewState={view} mapStyle={style} projection="globe" attributionControl={{ compact: true, customAttribution: 'Land: Natural Earth' }} style={{ width: '100%', height: '100%' }}>
-        <Source id="land" type="geojson" data="/map/land-50m.geojson">
+      <Map initialViewState={view} mapStyle={style} attributionControl={{ compact: true, customAttribution: 'Land: Natural Earth' }} style={{ width: '100%', height: '100%' }}>
+        <Source id="land" type="geojson" data="/map/land-50m.geojson" tolerance={0.1}>
           <Layer id="land-fill" type="fill" paint={{ 'fill-color': '#f6f8f9' }} />
           <Layer id="land-line" type="line" paint={{ 'line-color': '#8796a1', 'line-width': 0.6 }} />
         </Source>
