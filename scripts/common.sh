@@ -38,3 +38,8 @@ ensure_node_modules() {
 port_in_use() {
   (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null
 }
+
+# check_port NAME VALUE — a port number, or one line naming the variable.
+check_port() {
+  [[ "$2" =~ ^[0-9]+$ ]] && [ "$2" -ge 1 ] && [ "$2" -le 65535 ] || fail "$1 must be a port number from 1 to 65535, got '$2'"
+}

@@ -11,6 +11,7 @@ APP_PORT="${APP_PORT:-3000}"
 export DB_PORT="${DB_PORT:-3307}" SMTP_PORT="${SMTP_PORT:-2525}"
 export MAIL_STORE_DIR="${MAIL_STORE_DIR:-$ROOT/.data/mail}" DEV_INBOX="${DEV_INBOX:-1}"
 export APP_URL="${APP_URL:-http://localhost:$APP_PORT}"
+check_port APP_PORT "$APP_PORT"; check_port DB_PORT "$DB_PORT"; check_port SMTP_PORT "$SMTP_PORT"
 mkdir -p .data
 
 stop_pidfile() {
