@@ -3,6 +3,7 @@ import { NextIntlClientProvider } from 'next-intl';
 import { getLocale, getTranslations } from 'next-intl/server';
 import type { ReactNode } from 'react';
 import { notoSans, notoSyllabics } from './fonts';
+import { reviewedLocales, type Locale } from '@/lib/i18n/config';
 import './globals.css';
 
 export async function generateMetadata(): Promise<Metadata> {
@@ -19,6 +20,12 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
         <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-ice-raised focus:p-2">
           {t('skipToContent')}
         </a>
+        {/* Interface languages other than English ship as drafts until a translator approves them. */}
+        {!reviewedLocales.includes(locale as Locale) && (
+          <p role="note" className="border-b border-snow-200 bg-snow-100 px-4 py-1 text-center text-xs text-ink-soft">
+            {t('draftLanguage')}
+          </p>
+        )}
         <NextIntlClientProvider>{children}</NextIntlClientProvider>
       </body>
     </html>

@@ -1,8 +1,25 @@
+import Link from 'next/link';
 import { getTranslations } from 'next-intl/server';
+import { LanguageSwitcher } from '@/components/auth/language-switcher';
+import { getSignedInUser } from '@/lib/data/session';
+import { Caution } from '@/components/community/caution';
 
 export default async function HomePage() {
   const t = await getTranslations();
+  const user = await getSignedInUser();
   return (
+    <>
+    <header className="border-b border-snow-200 bg-ice-raised">
+      <div className="mx-auto flex max-w-4xl items-center gap-4 px-6 py-3">
+        <span className="text-lg font-bold text-frost-strong">{t('common.appName')}</span>
+        <div className="ml-auto flex items-center gap-3 text-sm">
+          <LanguageSwitcher />
+          <Link href={user ? '/workspace' : '/sign-in'} className="rounded bg-frost px-3 py-1.5 font-bold text-white hover:bg-frost-strong">
+            {user ? t('home.toWorkspace') : t('common.signIn')}
+          </Link>
+        </div>
+      </div>
+    </header>
     <main id="main" className="mx-auto max-w-4xl px-6 py-10">
       <p className="mb-6 rounded border border-thaw-fill bg-thaw-pale px-4 py-2 text-sm" role="note">
         {t('common.demoNotice')}
@@ -11,10 +28,10 @@ export default async function HomePage() {
       <p className="mt-1 text-ink-soft">{t('common.tagline')}</p>
       <h2 className="mt-8 text-xl font-bold">{t('home.title')}</h2>
       <p className="mt-2 max-w-prose leading-relaxed">{t('home.intro')}</p>
-      <section aria-labelledby="caution" className="mt-8 rounded border-l-4 border-frost bg-frost-pale px-4 py-3">
-        <h2 id="caution" className="font-bold">{t('caution.title')}</h2>
-        <p className="mt-1 text-sm leading-relaxed">{t('caution.body')}</p>
-      </section>
+      <div className="mt-8">
+        <Caution />
+      </div>
     </main>
+    </>
   );
 }
