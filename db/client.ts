@@ -1,6 +1,6 @@
 import 'server-only';
 import type mysql from 'mysql2/promise';
-import { env } from '@/lib/env';
+import { dbConfig } from '@/lib/env';
 import { connectDb, type Db } from './connect';
 
 // One pool per server process; Next's dev server re-evaluates modules, so keep it on globalThis.
@@ -8,7 +8,7 @@ const globalForDb = globalThis as unknown as { thawlineDb?: { pool: mysql.Pool; 
 
 const instance =
   globalForDb.thawlineDb ??
-  connectDb({ host: env.DB_HOST, port: env.DB_PORT, user: env.DB_USER, password: env.DB_PASSWORD, database: env.DB_NAME });
+  connectDb(dbConfig());
 globalForDb.thawlineDb = instance;
 
 export const db = instance.db;

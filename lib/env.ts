@@ -57,4 +57,14 @@ function parseEnv(source: NodeJS.ProcessEnv): Env {
 }
 
 export const env: Env = parseEnv(process.env);
+
+/** The database server and account from the configuration (no database chosen), for mysql2. */
+export function dbServerConfig() {
+  return { host: env.DB_HOST, port: env.DB_PORT, user: env.DB_USER, password: env.DB_PASSWORD };
+}
+
+/** The configured database, for `connectDb` (db/connect.ts); pass another name for a test database. */
+export function dbConfig(database: string = env.DB_NAME) {
+  return { ...dbServerConfig(), database };
+}
 export { envSchema, parseEnv };

@@ -1,10 +1,10 @@
 /** `npm run db:migrate`: applies the committed migrations in drizzle/ to the configured database. */
 import { connectDb } from '../db/connect';
 import { applyMigrations } from '../db/migrations';
-import { env } from '../lib/env';
+import { dbConfig, env } from '../lib/env';
 
 async function main() {
-  const { pool, db } = connectDb({ host: env.DB_HOST, port: env.DB_PORT, user: env.DB_USER, password: env.DB_PASSWORD, database: env.DB_NAME }, 2);
+  const { pool, db } = connectDb(dbConfig(), 2);
   try {
     await applyMigrations(db);
     console.log(`migrations applied to ${env.DB_NAME} on ${env.DB_HOST}:${env.DB_PORT}`);

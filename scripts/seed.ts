@@ -1,10 +1,10 @@
 /** `npm run db:seed`: writes the invented demo region into the configured database (idempotent). */
 import { connectDb } from '../db/connect';
 import { seedDemo } from '../db/seed';
-import { env } from '../lib/env';
+import { dbConfig, env } from '../lib/env';
 
 async function main() {
-  const { pool, db } = connectDb({ host: env.DB_HOST, port: env.DB_PORT, user: env.DB_USER, password: env.DB_PASSWORD, database: env.DB_NAME }, 2);
+  const { pool, db } = connectDb(dbConfig(), 2);
   try {
     const s = await seedDemo(db);
     console.log(

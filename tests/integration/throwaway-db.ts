@@ -6,7 +6,7 @@ import mysql from 'mysql2/promise';
 import { randomBytes } from 'node:crypto';
 import { connectDb, type Db } from '@/db/connect';
 import { applyMigrations } from '@/db/migrations';
-import { env } from '@/lib/env';
+import { dbConfig, dbServerConfig } from '@/lib/env';
 
 export interface ThrowawayDb {
   name: string;
@@ -17,10 +17,10 @@ export interface ThrowawayDb {
 
 export async function createThrowawayDb(options: { migrate?: boolean } = {}): Promise<ThrowawayDb> {
   const name = `thawline_test_${randomBytes(5).toString('hex')}`;
-  const admin = await mysql.createConnection({ host: env.DB_HOST, port: env.DB_PORT, user: env.DB_USER, password: env.DB_PASSWORD });
+  const admin = await mysql.createConnection(dbServerConfig());
   await admin.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
   await admin.end();
-  const { db, pool } = connectDb({ host: env.DB_HOST, port: env.DB_PORT, user: env.DB_USER, password: env.DB_PASSWORD, database: name }, 4);
+  const { db, pool } = connectDb(dbConfig(name), 4);
   if (options.migrate !== false) await applyMigrations(db);
   return {
     name,
@@ -28,7 +28,7 @@ export async function createThrowawayDb(options: { migrate?: boolean } = {}): Pr
     pool,
     async drop() {
       await pool.end();
-      const c = await mysql.createConnection({ host: env.DB_HOST, port: env.DB_PORT, user: env.DB_USER, password: env.DB_PASSWORD });
+      const c = await mysql.createConnection(dbServerConfig());
       await c.query(`DROP DATABASE IF EXISTS \`${name}\``);
       await c.end();
     },
