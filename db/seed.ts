@@ -9,7 +9,7 @@ import { communities, groundProfiles, groundProfileVersions, memberships, organi
 import { demoCommunities, demoOrganisations, demoUsers, DEMO_PASSWORD } from '@/lib/demo/nivalen';
 import { siteSchema } from '@/lib/engine/site-schema';
 import { formatIssues } from '@/lib/engine/validation';
-import { canonicalSha256 } from '@/lib/canonical-hash';
+import { canonicalSha256 } from '@/lib/engine/canonical-hash';
 import { hashPassword } from '@/lib/passwords';
 
 export interface SeedSummary {

@@ -27,10 +27,9 @@
  * References: see site-model.ts, ground-ice.ts, settlement.ts, hazard.ts and the climate modules;
  * `SOURCES` lists them for the provenance.
  */
-import { createHash } from 'node:crypto';
-import canonicalize from 'canonicalize';
 import { z } from 'zod';
 import { summarizeAirIndices } from './air-indices';
+import { canonicalSha256 } from './canonical-hash';
 import { defaultHistoryCache, type HistoryCache } from './assess-cache';
 import { TRANSITION_ZONE_THICKNESS_M } from './constants';
 import { meanStrainBetween, thawStrainProfile, type StrainInterval } from './ground-ice';
@@ -157,8 +156,6 @@ export interface AssessStats {
   scenariosMs: number;
 }
 
-const sha256 = (text: string) => createHash('sha256').update(text).digest('hex');
-
 /**
  * Cache key of the shared history: sha256 of the RFC 8785 canonical JSON of the engine version, the
  * site without the fields the history does not depend on (name, checklist) and the feedback flag.
@@ -167,7 +164,7 @@ export function profileHash(site: Site, permafrostCarbonFeedback: boolean): stri
   const { name: _name, checklist: _checklist, ...physical } = site;
   void _name;
   void _checklist;
-  return sha256(canonicalize({ engine_version: ENGINE_VERSION, site: physical, permafrost_carbon_feedback: permafrostCarbonFeedback }) ?? '');
+  return canonicalSha256({ engine_version: ENGINE_VERSION, site: physical, permafrost_carbon_feedback: permafrostCarbonFeedback });
 }
 
 const round = (v: number, digits = 3) => {
@@ -449,7 +446,6 @@ function assembleOutput(
     }
   }
 
-  const canonical = canonicalize(input) ?? '';
   const solverHealth = [...base, ...[...results.values()].flat()].reduce((s, r) => s + r.nonConvergedSteps, 0);
   return {
     baseline: { period: [b0, b1] as [number, number], ...baseSummary.fields, envelope: baseSummary.envelope },
@@ -484,7 +480,7 @@ function assembleOutput(
     },
     provenance: {
       engine_version: ENGINE_VERSION,
-      input_sha256: sha256(canonical),
+      input_sha256: canonicalSha256(input),
       profile_sha256: key,
       sources: [...SOURCES],
     },

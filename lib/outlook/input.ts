@@ -2,7 +2,7 @@
  * The engine input of an outlook and its fingerprint. Server and tests only (it imports the engine's
  * schema); client components must not import this file.
  */
-import { canonicalSha256 } from '@/lib/canonical-hash';
+import { canonicalSha256 } from '@/lib/engine/canonical-hash';
 import { assessInputSchema, type AssessInput } from '@/lib/engine/assess';
 import { OUTLOOK_HORIZONS, OUTLOOK_SCENARIOS } from './scenarios';
 

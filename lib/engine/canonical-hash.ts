@@ -1,6 +1,7 @@
 /**
  * SHA-256 of a JSON value in RFC 8785 canonical form (the `canonicalize` package), so equal inputs
- * hash equally whatever their key order. The engine's input_sha256 and stored profile versions use it.
+ * hash equally whatever their key order. The one hash of the project: the engine's `input_sha256`
+ * and history cache key, the stored profile versions' `site_sha256`, the outlooks' fingerprint.
  */
 import canonicalize from 'canonicalize';
 import { createHash } from 'node:crypto';
