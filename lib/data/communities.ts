@@ -2,6 +2,7 @@ import 'server-only';
 import { and, asc, count, eq } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { communities, groundProfiles, groundProfileVersions } from '@/db/schema';
+import { notFound } from 'next/navigation';
 import { requireActor, notFoundUnlessOwn } from './session';
 
 /**
@@ -104,20 +105,20 @@ export async function getGroundProfile(communitySlug: string, profileSlug: strin
     .from(groundProfiles)
     .where(and(eq(groundProfiles.communityId, row.id), eq(groundProfiles.slug, profileSlug)))
     .limit(1);
-  // A profile slug of another community is "not found" here too.
-  notFoundUnlessOwn(profile ? row.organisationId : null, await requireActor());
+  // A profile slug of another community is "not found" here too (the community is the actor's own).
+  if (!profile) notFound();
   const versions = await db
     .select({ version: groundProfileVersions.version, createdAt: groundProfileVersions.createdAt, sourceNote: groundProfileVersions.sourceNote, site: groundProfileVersions.site, siteSha256: groundProfileVersions.siteSha256 })
     .from(groundProfileVersions)
-    .where(eq(groundProfileVersions.profileId, profile!.id))
+    .where(eq(groundProfileVersions.profileId, profile.id))
     .orderBy(asc(groundProfileVersions.version));
-  const current = versions.find((v) => v.version === profile!.currentVersion) ?? versions[versions.length - 1]!;
+  const current = versions.find((v) => v.version === profile.currentVersion) ?? versions[versions.length - 1]!;
   return {
-    id: profile!.id,
-    slug: profile!.slug,
-    name: profile!.name,
-    currentVersion: profile!.currentVersion,
-    updatedAt: profile!.updatedAt.toISOString(),
+    id: profile.id,
+    slug: profile.slug,
+    name: profile.name,
+    currentVersion: profile.currentVersion,
+    updatedAt: profile.updatedAt.toISOString(),
     community: { id: row.id, slug: row.slug, name: row.name, isDemo: row.isDemo },
     site: current.site,
     siteSha256: current.siteSha256,
