@@ -5,8 +5,10 @@
 import { z } from 'zod';
 import { emailSchema } from './auth-schemas';
 
-export const roleValues = ['admin', 'planner', 'translator', 'council'] as const;
-export const roleSchema = z.enum(roleValues, { error: 'Choose a role: admin, planner, translator or council.' });
+import { roles } from './roles';
+
+export const roleValues = roles;
+export const roleSchema = z.enum(roleValues, { error: `Choose a role: ${roles.slice(0, -1).join(', ')} or ${roles[roles.length - 1]}.` });
 
 const idSchema = (what: string) => z.string({ error: `The ${what} is missing.` }).uuid({ error: `The ${what} is not valid.` });
 

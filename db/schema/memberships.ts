@@ -3,8 +3,10 @@ import { timestamps, uuidPk, uuidRef } from './columns';
 import { organisations } from './organisations';
 import { users } from './users';
 
-export const roles = ['admin', 'planner', 'translator', 'council'] as const;
-export type Role = (typeof roles)[number];
+// Relative path: drizzle-kit loads the schema without the project's path aliases.
+import { roles } from '../../lib/roles';
+
+export { roles, type Role } from '../../lib/roles';
 
 /** A person's role in one organisation; a person may belong to several. */
 export const memberships = mysqlTable(
