@@ -58,6 +58,15 @@ function parseEnv(source: NodeJS.ProcessEnv): Env {
 
 export const env: Env = parseEnv(process.env);
 
+/** Options of the long-lived preference cookies (active organisation, interface language). */
+export const preferenceCookieOptions = {
+  httpOnly: true,
+  sameSite: 'lax',
+  secure: env.APP_URL.startsWith('https:'),
+  path: '/',
+  maxAge: 365 * 24 * 60 * 60,
+} as const;
+
 /** The database server and account from the configuration (no database chosen), for mysql2. */
 export function dbServerConfig() {
   return { host: env.DB_HOST, port: env.DB_PORT, user: env.DB_USER, password: env.DB_PASSWORD };

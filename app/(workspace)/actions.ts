@@ -7,7 +7,7 @@ import { z } from 'zod';
 import { validatedAction, type ActionResult } from '@/lib/actions';
 import { switchOrganisationSchema } from '@/lib/admin-schemas';
 import { switchOrganisation } from '@/lib/data/organisations';
-import { env } from '@/lib/env';
+import { preferenceCookieOptions } from '@/lib/env';
 import { locales, LOCALE_COOKIE } from '@/lib/i18n/config';
 
 /** Makes another of the person's organisations active. Not one of theirs → 404. */
@@ -20,7 +20,7 @@ export const switchOrganisationAction = validatedAction(switchOrganisationSchema
 
 /** Chooses the interface language (a cookie). Anyone may call it; it changes nothing but the language. */
 export const setLocaleAction = validatedAction(z.object({ locale: z.enum(locales, { error: 'Choose one of the listed languages.' }) }), async ({ locale }): Promise<ActionResult> => {
-  (await cookies()).set(LOCALE_COOKIE, locale, { httpOnly: true, sameSite: 'lax', secure: env.APP_URL.startsWith('https:'), path: '/', maxAge: 365 * 24 * 60 * 60 });
+  (await cookies()).set(LOCALE_COOKIE, locale, preferenceCookieOptions);
   revalidatePath('/', 'layout');
   return { ok: true };
 });

@@ -4,7 +4,7 @@ import { getTranslations } from 'next-intl/server';
 import { LanguageSwitcher } from '@/components/auth/language-switcher';
 import { OrganisationSwitcher } from '@/components/auth/organisation-switcher';
 import { SignOutButton } from '@/components/auth/sign-out-button';
-import { requireActor } from '@/lib/data/session';
+import { hasRole, requireActor, ROLES } from '@/lib/data/session';
 
 /**
  * The signed-in shell. requireActor() here sends anonymous visitors to sign-in; every page below still
@@ -21,7 +21,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
           <nav aria-label={t('nav')} className="flex items-center gap-4 text-sm">
             <Link href="/workspace" className="hover:underline">{t('title')}</Link>
             <Link href="/communities" className="hover:underline">{t('communities')}</Link>
-            {actor.role === 'admin' ? (
+            {hasRole(actor, ROLES.admin) ? (
               <>
                 <Link href="/admin/members" className="hover:underline">{t('members')}</Link>
                 <Link href="/admin/audit" className="hover:underline">{t('audit')}</Link>

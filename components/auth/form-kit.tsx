@@ -2,9 +2,11 @@
 
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
 import type { ReactNode } from 'react';
+// Type only (erased at build): the server-only module never reaches the client bundle.
+import type { ActionResult } from '@/lib/actions';
 
-/** The shape server actions return (lib/actions.ts ActionResult), as the client sees it. */
-export type ClientActionResult = { ok: true; message?: string } | { ok: false; message: string; fieldErrors: Record<string, string[]> } | undefined;
+/** The shape server actions return, as the client sees it. */
+export type ClientActionResult = ActionResult<unknown> | undefined;
 
 /** Puts every server field error onto the form; returns the form-level message for a banner. */
 export function applyServerErrors<T extends FieldValues>(result: ClientActionResult, setError: UseFormSetError<T>): string | null {

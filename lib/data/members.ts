@@ -1,5 +1,5 @@
 import 'server-only';
-import { and, asc, eq, sql } from 'drizzle-orm';
+import { and, asc, eq } from 'drizzle-orm';
 import { db, type Tx } from '@/db/client';
 import { memberships, users, type Role } from '@/db/schema';
 import { recordAuditEvent } from './audit';
@@ -83,11 +83,4 @@ export async function removeMember(input: { membershipId: string }): Promise<voi
       tx,
     );
   });
-}
-
-/** Number of members of the active organisation (any role may know how many colleagues it has). */
-export async function countMembers(): Promise<number> {
-  const actor = await requireActor();
-  const [row] = await db.select({ n: sql<number>`count(*)` }).from(memberships).where(eq(memberships.organisationId, actor.organisationId));
-  return Number(row?.n ?? 0);
 }

@@ -6,6 +6,7 @@ import { and, asc, eq, gt } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { memberships, organisations, roles, sessions, users, type Role } from '@/db/schema';
 import { auth } from '@/lib/auth';
+import { safeReturnPath } from '@/lib/auth-schemas';
 
 /**
  * THE authorization core. Every data module asks here who is acting, in which organisation and with
@@ -112,8 +113,7 @@ export const getActor = cache(async (): Promise<Actor | null> => {
 
 /** The path of the current request (set by proxy.ts), for the sign-in return path. */
 async function currentPath(): Promise<string> {
-  const p = (await headers()).get(PATH_HEADER);
-  return p && p.startsWith('/') && !p.startsWith('//') ? p : '/workspace';
+  return safeReturnPath((await headers()).get(PATH_HEADER));
 }
 
 export function signInPath(returnTo: string): string {
@@ -131,8 +131,13 @@ export async function requireActor(allowed?: readonly Role[]): Promise<Actor> {
     if (await getSignedInUser()) forbidden();
     redirect(signInPath(await currentPath()));
   }
-  if (allowed && !allowed.includes(actor.role)) forbidden();
+  if (allowed && !hasRole(actor, allowed)) forbidden();
   return actor;
+}
+
+/** True when the actor's role is one of `allowed` (use with ROLES, so pages and actions agree). */
+export function hasRole(actor: Pick<Actor, 'role'>, allowed: readonly Role[]): boolean {
+  return allowed.includes(actor.role);
 }
 
 /** True when the thing belongs to the actor's active organisation. */
@@ -177,7 +182,7 @@ export async function actorForRoute(allowed?: readonly Role[]): Promise<Actor | 
     if (await getSignedInUser()) return jsonError(403, 'You are signed in but no longer belong to an organisation.');
     return jsonError(401, accessMessages[401]);
   }
-  if (allowed && !allowed.includes(actor.role)) return jsonError(403, accessMessages[403]);
+  if (allowed && !hasRole(actor, allowed)) return jsonError(403, accessMessages[403]);
   return actor;
 }
 

@@ -43,10 +43,6 @@ export const SCENARIO_STYLES: Readonly<Record<OutlookScenario, ScenarioStyle>> =
 /** The baseline (reference period) on charts: a neutral grey, thin, long dashes. */
 export const BASELINE_STYLE = { colour: '#56646f', dash: '4 2', width: 1.5 } as const;
 
-export function isOutlookScenario(s: string): s is OutlookScenario {
-  return (OUTLOOK_SCENARIOS as readonly string[]).includes(s);
-}
-
 /** Scenarios of a result in the fixed low → high order (unknown ids dropped). */
 export function orderScenarios(list: readonly string[]): OutlookScenario[] {
   return OUTLOOK_SCENARIOS.filter((s) => list.includes(s));

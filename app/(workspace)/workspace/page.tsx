@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { getTranslations } from 'next-intl/server';
-import { requireActor } from '@/lib/data/session';
+import { hasRole, requireActor, ROLES } from '@/lib/data/session';
 
 export const metadata: Metadata = { title: 'Workspace' };
 
@@ -25,7 +25,7 @@ export default async function WorkspacePage({ searchParams }: { searchParams: Pr
           <li>
             <Link href="/communities" className="text-frost underline">{t('communities')}</Link>
           </li>
-          {actor.role === 'admin' ? (
+          {hasRole(actor, ROLES.admin) ? (
             <>
               <li>
                 <Link href="/admin/members" className="text-frost underline">{t('members')}</Link>

@@ -3,7 +3,7 @@ import { Suspense } from 'react';
 import { getLocale, getTranslations } from 'next-intl/server';
 import { getGroundProfile } from '@/lib/data/communities';
 import { getOutlook, type OutlookView } from '@/lib/data/outlooks';
-import { requireActor, ROLES } from '@/lib/data/session';
+import { hasRole, requireActor, ROLES } from '@/lib/data/session';
 import { SETTLEMENT_HIGH_M, SETTLEMENT_MODERATE_M, VERY_WARM_PERMAFROST_C, WARM_PERMAFROST_C } from '@/lib/engine/constants';
 import { reviewedLocales, type Locale } from '@/lib/i18n/config';
 import { airSeries, envelopeSeries, thawSeries } from '@/lib/outlook/chart-data';
@@ -38,7 +38,7 @@ export default async function OutlookPage({ params }: { params: Promise<{ slug: 
   const { slug, profile } = await params;
   const p = await getGroundProfile(slug, profile);
   const actor = await requireActor();
-  const canRun = (ROLES.planning as readonly string[]).includes(actor.role);
+  const canRun = hasRole(actor, ROLES.planning);
   const t = await getTranslations('outlook');
   const tp = await getTranslations('profile');
 
