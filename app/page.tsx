@@ -3,6 +3,7 @@ import { getTranslations } from 'next-intl/server';
 import { LanguageSwitcher } from '@/components/auth/language-switcher';
 import { getSignedInUser } from '@/lib/data/session';
 import { Caution } from '@/components/community/caution';
+import { DemoNotice } from '@/components/community/demo-badge';
 
 export default async function HomePage() {
   const t = await getTranslations();
@@ -21,9 +22,9 @@ export default async function HomePage() {
       </div>
     </header>
     <main id="main" className="mx-auto max-w-4xl px-6 py-10">
-      <p className="mb-6 rounded border border-thaw-fill bg-thaw-pale px-4 py-2 text-sm" role="note">
-        {t('common.demoNotice')}
-      </p>
+      <div className="mb-6">
+        <DemoNotice />
+      </div>
       <h1 className="text-3xl font-bold text-frost-strong">{t('common.appName')}</h1>
       <p className="mt-1 text-ink-soft">{t('common.tagline')}</p>
       <h2 className="mt-8 text-xl font-bold">{t('home.title')}</h2>

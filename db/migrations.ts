@@ -16,8 +16,12 @@ export async function applyMigrations(db: Db): Promise<void> {
 }
 
 /** Committed migrations not yet applied to the database (0 when current). */
+// The committed migrations are fixed for a running build: read and hash them once (the health check
+// polls this).
+let committed: ReturnType<typeof readMigrationFiles> | undefined;
+
 export async function pendingMigrationCount(pool: mysql.Pool): Promise<number> {
-  const files = readMigrationFiles({ migrationsFolder: MIGRATIONS_FOLDER });
+  const files = (committed ??= readMigrationFiles({ migrationsFolder: MIGRATIONS_FOLDER }));
   let applied = new Set<string>();
   try {
     const [rows] = await pool.query(`SELECT hash FROM \`${MIGRATIONS_TABLE}\``);

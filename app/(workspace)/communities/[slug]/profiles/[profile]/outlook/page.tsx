@@ -5,7 +5,6 @@ import { getGroundProfile } from '@/lib/data/communities';
 import { getOutlook, type OutlookView } from '@/lib/data/outlooks';
 import { hasRole, requireActor, ROLES } from '@/lib/data/session';
 import { SETTLEMENT_HIGH_M, SETTLEMENT_MODERATE_M, VERY_WARM_PERMAFROST_C, WARM_PERMAFROST_C } from '@/lib/engine/constants';
-import { reviewedLocales, type Locale } from '@/lib/i18n/config';
 import { airSeries, envelopeSeries, thawSeries } from '@/lib/outlook/chart-data';
 import type { BaselineResult, HazardLevel, OutlookResult, WindowResult } from '@/lib/outlook/result';
 import { formatDepth, formatIndex, formatNumber, formatTemperature, settlementReading } from '@/lib/outlook/rounding';
@@ -120,7 +119,6 @@ function OutlookResultView({ outlook, result, locale, t }: { outlook: OutlookVie
   const horizonNames = Object.fromEntries(horizons.map((h) => [h, t('horizon', { horizon: h })])) as Record<number, string>;
   const summary = buildSummary(result, locale, (s) => t(`scenarioUnder.${SCENARIO_STYLES[s].key}`));
   const row = (s: string, h: number) => result.results.find((r) => r.scenario === s && r.horizon === h);
-  const draft = !reviewedLocales.includes(locale as Locale);
   const ratingWords = (level: HazardLevel) => ({ word: t(`rating.short.${RATING_WORD[level]}`), detail: t('rating.inThisScreening') });
 
   return (
@@ -128,7 +126,6 @@ function OutlookResultView({ outlook, result, locale, t }: { outlook: OutlookVie
       {summary ? (
         <section aria-labelledby="summary" className="max-w-3xl">
           <h2 id="summary" className="text-lg font-bold">{t('summaryTitle')}</h2>
-          {draft ? <DraftNote /> : null}
           <p className="mt-2 leading-relaxed">
             {summary.sentences.map((s) => t(`summary.${s.key}` as 'summary.warmYears', s.values)).join(' ')}
           </p>
@@ -246,11 +243,6 @@ function OutlookResultView({ outlook, result, locale, t }: { outlook: OutlookVie
       <Provenance outlook={outlook} result={result} t={t} />
     </>
   );
-}
-
-async function DraftNote() {
-  const tc = await getTranslations('common');
-  return <p className="mt-1 text-xs text-ink-muted">{tc('draftLanguage')}</p>;
 }
 
 function reasonText(code: string, t: T, check: (item: string) => string): string {
