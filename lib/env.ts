@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 
-const port = z.coerce.number().int().min(1).max(65_535);
+const port = z.coerce.number({ error: 'must be a port number from 1 to 65535' }).int('must be a port number from 1 to 65535').min(1, 'must be a port number from 1 to 65535').max(65_535, 'must be a port number from 1 to 65535');
 const flag = z
   .enum(['0', '1', 'true', 'false', 'yes', 'no', ''])
   .transform((v) => v === '1' || v === 'true' || v === 'yes');
@@ -56,7 +56,20 @@ function parseEnv(source: NodeJS.ProcessEnv): Env {
   return result.data;
 }
 
-export const env: Env = parseEnv(process.env);
+function loadEnv(): Env {
+  try {
+    return parseEnv(process.env);
+  } catch (e) {
+    // A script or `next start` stops with the one line, not a stack trace; under vitest it throws.
+    if (process.env.VITEST === undefined && typeof process.exit === 'function') {
+      console.error(`thawline: ${(e as Error).message}`);
+      process.exit(1);
+    }
+    throw e;
+  }
+}
+
+export const env: Env = loadEnv();
 
 /** Options of the long-lived preference cookies (active organisation, interface language). */
 export const preferenceCookieOptions = {

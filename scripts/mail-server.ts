@@ -9,9 +9,11 @@ import { simpleParser, type AddressObject } from 'mailparser';
 import { randomUUID } from 'node:crypto';
 import path from 'node:path';
 import { saveMessage } from '../lib/mail-store';
+import { env } from '../lib/env';
 
-const port = Number(process.env.SMTP_PORT ?? 2525);
-const dir = path.resolve(process.env.MAIL_STORE_DIR ?? '.data/mail');
+// The same validated configuration as the app (a bad SMTP_PORT stops here with one line).
+const port = env.SMTP_PORT;
+const dir = path.resolve(env.MAIL_STORE_DIR);
 
 function addresses(a: AddressObject | AddressObject[] | undefined): string[] {
   const list = Array.isArray(a) ? a : a ? [a] : [];
