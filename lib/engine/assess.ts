@@ -42,6 +42,7 @@ import {
   HISTORY_FIRST_YEAR,
   baselineRecords,
   computeHistory,
+  meanOf,
   prepareSite,
   runScenario,
   type PreparedSite,
@@ -171,7 +172,6 @@ const round = (v: number, digits = 3) => {
   const f = 10 ** digits;
   return Math.round(v * f) / f;
 };
-const mean = (xs: number[]) => xs.reduce((s, v) => s + v, 0) / xs.length;
 
 interface BaselineGround {
   /** Baseline permafrost table [m], or null (no permafrost at baseline). */
@@ -261,7 +261,7 @@ function summarizeWindow(
   );
   const tables = years.map((r) => r.permafrostTableM).filter((t): t is number => t !== null);
   const onset = all.find((r) => r.talik && r.year <= window[1]);
-  const groundT = mean(years.map((r) => r.meanC[zaaIndex]));
+  const groundT = meanOf(years.map((r) => r.meanC[zaaIndex]));
   const settlementEnd = settlement[window[1] - first];
   const hazard: HazardRating = rateHazard({
     groundTemperatureC: groundT,
@@ -283,7 +283,7 @@ function summarizeWindow(
   return {
     fields: {
       window,
-      air_temperature_c: round(mean(years.map((r) => r.airMeanC)), 2),
+      air_temperature_c: round(meanOf(years.map((r) => r.airMeanC)), 2),
       thawing_index_c_days: round(indices.meanThawingIndexCDays, 0),
       freezing_index_c_days: round(indices.meanFreezingIndexCDays, 0),
       thawing_index_design_c_days: round(indices.designThawingIndexCDays, 0),
@@ -291,8 +291,8 @@ function summarizeWindow(
       freezing_index_design_c_days: round(indices.designFreezingIndexCDays, 0),
       freezing_index_coldest_c_days: round(indices.coldestFreezingIndexCDays, 0),
       design_index_period: indices.designPeriod,
-      seasonal_thaw_m: round(mean(years.map((r) => r.seasonalThawM)), 3),
-      permafrost_table_m: tables.length ? round(mean(tables), 3) : null,
+      seasonal_thaw_m: round(meanOf(years.map((r) => r.seasonalThawM)), 3),
+      permafrost_table_m: tables.length ? round(meanOf(tables), 3) : null,
       talik: years.some((r) => r.talik),
       talik_onset_year: onset ? onset.year : null,
       ground_temperature_c: round(groundT, 2),

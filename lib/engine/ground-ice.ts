@@ -163,6 +163,17 @@ export function thawStrainProfile(
  * @returns Mean strain [-]; 0 for an empty interval.
  */
 export function meanStrainBetween(profile: ReadonlyArray<StrainInterval>, topM: number, bottomM: number): number {
+  return bottomM > topM ? strainIntegralBetween(profile, topM, bottomM) / (bottomM - topM) : 0;
+}
+
+/**
+ * Thaw strain integrated over a depth interval, ∫ ε(z) dz [m] (Andersland & Ladanyi 2004: the
+ * settlement of the interval once it has thawed and consolidated).
+ * @param profile Strain intervals from {@link thawStrainProfile}.
+ * @param topM Top of the interval [m]. @param bottomM Bottom [m].
+ * @returns The integral [m]; 0 when bottomM ≤ topM.
+ */
+export function strainIntegralBetween(profile: ReadonlyArray<StrainInterval>, topM: number, bottomM: number): number {
   if (!(bottomM > topM)) return 0;
   let sum = 0;
   for (const p of profile) {
@@ -170,5 +181,5 @@ export function meanStrainBetween(profile: ReadonlyArray<StrainInterval>, topM: 
     const b = Math.min(bottomM, p.bottom_m);
     if (b > a) sum += (b - a) * p.strain;
   }
-  return sum / (bottomM - topM);
+  return sum;
 }

@@ -784,11 +784,6 @@ export class HeatConductionColumn {
     return this.surfaceT;
   }
 
-  /** Whether snow cells were active in the last step. */
-  get hasSnow(): boolean {
-    return this.snowActive;
-  }
-
   /**
    * Thaw depth as the engine contract defines it [m]: 0 while the ground surface is at or below the
    * top layer's freezing point; otherwise the first depth at which the temperature reaches its

@@ -7,7 +7,7 @@
  * Basis, doi:10.1017/9781009157896.001.
  */
 import { z } from 'zod';
-import { annualErfPathwayWm2, scenarioErfWm2, type ScenarioId } from './data/ssp-forcing';
+import { scenarioErfWm2, type ScenarioId } from './data/ssp-forcing';
 
 export type { ScenarioId } from './data/ssp-forcing';
 
@@ -35,12 +35,3 @@ export function effectiveRadiativeForcingWm2(scenario: ScenarioId, year: number)
   return scenarioErfWm2(scenario, year);
 }
 
-/** Annual ERF [W m-2] for `firstYear..lastYear` (defaults 1750–2100). */
-export function effectiveRadiativeForcingSeriesWm2(scenario: ScenarioId, firstYear?: number, lastYear?: number): Float64Array {
-  return annualErfPathwayWm2(scenario, firstYear, lastYear);
-}
-
-/** Index of a scenario in the low→high order. */
-export function scenarioRank(scenario: ScenarioId): number {
-  return SCENARIOS.indexOf(scenario);
-}

@@ -16,7 +16,7 @@
  *     Nature 410, 889–890, 2001, doi:10.1038/35069701 (settlement from the deepening of thaw into
  *     ice-bearing ground).
  */
-import type { StrainInterval } from './ground-ice';
+import { strainIntegralBetween, type StrainInterval } from './ground-ice';
 
 /**
  * Settlement when thaw reaches `thawDepthM` below a baseline permafrost table [1].
@@ -29,14 +29,7 @@ import type { StrainInterval } from './ground-ice';
  *   not below the baseline table.
  */
 export function settlementBetween(profile: ReadonlyArray<StrainInterval>, baselineTableM: number, thawDepthM: number): number {
-  if (!(thawDepthM > baselineTableM)) return 0;
-  let s = 0;
-  for (const p of profile) {
-    const a = Math.max(baselineTableM, p.top_m);
-    const b = Math.min(thawDepthM, p.bottom_m);
-    if (b > a) s += (b - a) * p.strain;
-  }
-  return s;
+  return strainIntegralBetween(profile, baselineTableM, thawDepthM);
 }
 
 /**

@@ -58,7 +58,7 @@ import { localMonthlyAirTemperatures, preindustrialMonthlyAirTemperatures } from
 import { meanPreservingDailyFromMonthly, dailyForYearOfSeries, MONTH_OF_DAY } from './monthly-to-daily';
 import { siteRegionalFactors } from './regional-warming';
 import type { ScenarioId } from './scenario-forcing';
-import { MIN_COLUMN_DEPTH_M, type Site, type SiteLayer } from './site-schema';
+import { givenColumnDepthM, MIN_COLUMN_DEPTH_M, type Site, type SiteLayer } from './site-schema';
 import { layerMaterialAdapter, snowPropertiesAdapter, surfaceNFactorsAdapter, type SurfaceNFactors } from './site-model-adapters';
 
 /** Depths at which envelopes and ground temperatures are reported [m]. */
@@ -129,7 +129,7 @@ export const SNOW_CASE_FACTORS = { baseline: 1, plus_30: 1.3, minus_30: 0.7, dri
  */
 export function extendLayers(layers: readonly SiteLayer[], minDepthM = MIN_COLUMN_DEPTH_M): { layers: ColumnLayer[]; extendedToM: number | null } {
   const out: ColumnLayer[] = layers.map((l) => ({ ...l, extended: false }));
-  const total = layers.reduce((s, l) => s + l.thickness_m, 0);
+  const total = givenColumnDepthM({ layers });
   if (total >= minDepthM) return { layers: out, extendedToM: null };
   const last = out[out.length - 1];
   last.thickness_m += minDepthM - total;
@@ -211,8 +211,8 @@ export function dailySnowCovers(p: PreparedSite, params: SurfaceParameters): (Sn
       out.push(null);
       continue;
     }
-    const rho = Math.min(600, Math.max(50, p.baseSnowDensityKgM3[d] + params.snowDensityShiftKgM3));
-    const props = snowPropertiesAdapter(rho);
+    // snowPropertiesAdapter clamps the shifted density to Sturm's range.
+    const props = snowPropertiesAdapter(p.baseSnowDensityKgM3[d] + params.snowDensityShiftKgM3);
     out.push({ thicknessM: h, conductivityWmK: props.conductivityWmK, heatCapacityJm3K: props.heatCapacityJm3K });
   }
   return out;
@@ -819,7 +819,8 @@ function runHistoryWith(p: PreparedSite, params: SurfaceParameters) {
   return { spin, records, extension, carry2014 };
 }
 
-function meanOf(values: number[]): number {
+/** Arithmetic mean of the values [same unit]. */
+export function meanOf(values: number[]): number {
   return values.reduce((s, v) => s + v, 0) / values.length;
 }
 
@@ -839,7 +840,6 @@ export function computeHistory(p: PreparedSite): SiteHistory {
   const wantsCalibration = targets.altM !== undefined || targets.magtC !== undefined;
   let params = start;
   let adjusted: string[] = [];
-  let run = runHistoryWith(p, params);
   const measure = (r: ReturnType<typeof runHistoryWith>) => {
     const base = baselineRecords(p, { records: r.records, baselineExtension: r.extension });
     return {
@@ -850,8 +850,13 @@ export function computeHistory(p: PreparedSite): SiteHistory {
   const hits = (m: { altM: number; magtC?: number }) =>
     (targets.altM === undefined || Math.abs(m.altM - targets.altM) <= 0.2 * targets.altM) &&
     (targets.magtC === undefined || (m.magtC !== undefined && Math.abs(m.magtC - targets.magtC) <= 0.5));
-  let achieved = measure(run);
-  if (wantsCalibration) {
+  // With observations, the first calibration attempt replaces the default run: run it only without.
+  let run!: ReturnType<typeof runHistoryWith>;
+  let achieved!: ReturnType<typeof measure>;
+  if (!wantsCalibration) {
+    run = runHistoryWith(p, params);
+    achieved = measure(run);
+  } else {
     let offsets = { altM: 0, magtK: 0 };
     for (let attempt = 0; attempt < 3 && !(attempt > 0 && hits(achieved)); attempt++) {
       const cal = calibrateSurface(p, start, targets, offsets);

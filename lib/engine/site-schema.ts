@@ -246,7 +246,7 @@ export const siteSchema = z
     bottom_heat_flux_w_m2: finite().min(0).max(0.5).default(DEFAULT_BOTTOM_HEAT_FLUX_W_M2),
   })
   .superRefine((site, ctx) => {
-    const total = site.layers.reduce((s, l) => s + l.thickness_m, 0);
+    const total = givenColumnDepthM(site);
     const profile = site.observed?.ground_temperature_profile;
     if (profile) {
       const deepest = profile.points[profile.points.length - 1].depth_m;
@@ -273,7 +273,7 @@ export type Site = z.output<typeof siteSchema>;
 export type SiteLayer = Site['layers'][number];
 
 /** Total thickness of the layers given [m] (before the engine's extension to {@link MIN_COLUMN_DEPTH_M}). */
-export function givenColumnDepthM(site: Pick<Site, 'layers'>): number {
+export function givenColumnDepthM(site: { layers: ReadonlyArray<{ thickness_m: number }> }): number {
   return site.layers.reduce((s, l) => s + l.thickness_m, 0);
 }
 

@@ -185,7 +185,7 @@ export function co2ConcentrationPpm(scenario: ScenarioId, year: number): number 
 
 function anchoredScenarioErf(scenario: Exclude<ScenarioId, 'SSP1-1.9'>, year: number): number {
   const [f20, f50, f100] = SCENARIO_ERF_ANCHORS_W_M2[scenario];
-  return monotoneCubic([HISTORICAL_LAST_YEAR, 2020, 2050, 2100], [historicalErfWm2(HISTORICAL_LAST_YEAR), f20, f50, f100], year);
+  return monotoneCubic([HISTORICAL_LAST_YEAR, ...SCENARIO_ERF_ANCHOR_YEARS], [historicalErfWm2(HISTORICAL_LAST_YEAR), f20, f50, f100], year);
 }
 
 /** CO2 gap SSP1-2.6 − SSP1-1.9 [ppm], opening linearly from 2020 to 2100 (reconstruction, item 4). */
@@ -211,9 +211,3 @@ export function scenarioErfWm2(scenario: ScenarioId, year: number): number {
   return base - CO2_FORCING_SCALE_W_M2 * Math.log(c126 / (c126 - gap));
 }
 
-/** The annual pathway [W m-2] for years `firstYear..lastYear` inclusive. */
-export function annualErfPathwayWm2(scenario: ScenarioId, firstYear = FORCING_FIRST_YEAR, lastYear = FORCING_LAST_YEAR): Float64Array {
-  const out = new Float64Array(lastYear - firstYear + 1);
-  for (let i = 0; i < out.length; i++) out[i] = scenarioErfWm2(scenario, firstYear + i);
-  return out;
-}
