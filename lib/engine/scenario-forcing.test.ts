@@ -16,7 +16,15 @@ describe('scenarios and forcing', () => {
   });
 
   it('passes through the AR6 ch. 7 ERF anchors of 2020 / 2050 / 2100 (as given in the issue)', () => {
-    for (const [s, [f20, f50, f100]] of Object.entries(SCENARIO_ERF_ANCHORS_W_M2)) {
+    // The issue's AR6 WG1 ch. 7 values as literals (not the engine's own table), from the issue text.
+    const ar6: Record<keyof typeof SCENARIO_ERF_ANCHORS_W_M2, [number, number, number]> = {
+      'SSP1-2.6': [2.8, 3.58, 3.1],
+      'SSP2-4.5': [2.83, 4.24, 5.4],
+      'SSP3-7.0': [2.76, 4.63, 8.18],
+      'SSP5-8.5': [2.94, 5.3, 10.0],
+    };
+    expect(Object.keys(SCENARIO_ERF_ANCHORS_W_M2).sort()).toEqual(Object.keys(ar6).sort());
+    for (const [s, [f20, f50, f100]] of Object.entries(ar6)) {
       const id = s as keyof typeof SCENARIO_ERF_ANCHORS_W_M2;
       expect(effectiveRadiativeForcingWm2(id, 2020)).toBeCloseTo(f20, 10);
       expect(effectiveRadiativeForcingWm2(id, 2050)).toBeCloseTo(f50, 10);

@@ -48,3 +48,42 @@ describe('Stefan and Neumann thaw depths', () => {
     expect(cold).toBeLessThan(warm);
   });
 });
+
+describe('two-phase Neumann solution satisfies its own problem (Carslaw & Jaeger 1959, §11.2)', () => {
+  // The problem of §11.2 stated independently of the root-finding: the temperature is T_s at the
+  // surface, the freezing point at the front, T_0 far below, and at the front the heat conducted in
+  // from the thawed side minus that conducted away into the frozen side melts the ice, L dX/dt.
+  // Checked by finite differences of the returned field, so an error in the transcendental equation
+  // (the term for the frozen side especially) shows up here.
+  const p = {
+    surfaceTemperatureC: 5,
+    initialTemperatureC: -4,
+    freezingPointC: 0,
+    conductivityThawedWmK: 1.2,
+    conductivityFrozenWmK: 2.0,
+    heatCapacityThawedJm3K: 2.6e6,
+    heatCapacityFrozenJm3K: 1.9e6,
+    latentHeatJm3: 1.0e8,
+  };
+  const n = neumannTwoPhaseThaw(p);
+  const t = 20 * 86_400;
+  const x = n.frontDepthM(t);
+
+  it('meets the boundary values: T_s at the surface, T_f at the front, T_0 deep down', () => {
+    expect(n.temperatureC(0, t)).toBeCloseTo(p.surfaceTemperatureC, 6);
+    expect(Math.abs(n.temperatureC(x, t) - p.freezingPointC)).toBeLessThan(1e-3);
+    expect(n.temperatureC(50, t)).toBeCloseTo(p.initialTemperatureC, 3);
+  });
+
+  it('balances heat at the front: k_t ∂T/∂z|thawed − k_f ∂T/∂z|frozen = L dX/dt, within 1 %', () => {
+    const h = 1e-5;
+    const gradThawed = (n.temperatureC(x - h, t) - n.temperatureC(x - 2 * h, t)) / h;
+    const gradFrozen = (n.temperatureC(x + 2 * h, t) - n.temperatureC(x + h, t)) / h;
+    // Heat flows down (against the gradient): in from above, k_t·(−∂T/∂z); out below, k_f·(−∂T/∂z).
+    const netInWm2 = -p.conductivityThawedWmK * gradThawed + p.conductivityFrozenWmK * gradFrozen;
+    const dt = 60;
+    const speed = (n.frontDepthM(t + dt) - n.frontDepthM(t - dt)) / (2 * dt);
+    expect(netInWm2 / (p.latentHeatJm3 * speed)).toBeGreaterThan(0.99);
+    expect(netInWm2 / (p.latentHeatJm3 * speed)).toBeLessThan(1.01);
+  });
+});

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { runAssessment } from '@/lib/engine/assess';
 import { exampleSite } from '@/lib/engine/site-schema';
 import { outlookInput, outlookInputSha256 } from './input';
+import { canonicalSha256 } from '@/lib/engine/canonical-hash';
 import { outlookResultSchema } from './result';
 import { buildSummary } from './summary';
 
@@ -19,8 +20,9 @@ describe('outlook input and the stored document', () => {
     const input = outlookInput(exampleSite);
     expect(input.scenarios).toEqual(['SSP1-1.9', 'SSP1-2.6', 'SSP2-4.5', 'SSP3-7.0', 'SSP5-8.5']);
     expect(input.horizons).toEqual([2030, 2050, 2080]);
-    // Key order does not change the fingerprint (RFC 8785).
-    const reordered = { horizons: input.horizons, scenarios: input.scenarios, site: input.site };
-    expect(outlookInputSha256(reordered)).toBe(outlookInputSha256(input));
+    // Key order does not change the fingerprint (RFC 8785); checked on the hash itself, on unparsed
+    // objects, since the schema would rebuild any input in its own key order.
+    expect(canonicalSha256({ b: 1, a: { d: 2, c: 3 } })).toBe(canonicalSha256({ a: { c: 3, d: 2 }, b: 1 }));
+    expect(canonicalSha256({ a: 1 })).not.toBe(canonicalSha256({ a: 2 }));
   });
 });
