@@ -57,8 +57,10 @@ describe('the demo seed', () => {
 
   it('marks every demo organisation and community as demo data', async () => {
     const orgs = await t.db.select({ isDemo: organisations.isDemo, country: organisations.countryCode }).from(organisations);
+    expect(orgs.length).toBeGreaterThan(0);
     expect(orgs.every((o) => o.isDemo && o.country === 'XX')).toBe(true);
     const comms = await t.db.select({ isDemo: communities.isDemo }).from(communities);
+    expect(comms.length).toBeGreaterThan(0);
     expect(comms.every((c) => c.isDemo)).toBe(true);
   });
 });

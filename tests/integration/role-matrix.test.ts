@@ -14,7 +14,7 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import nodemailer from 'nodemailer';
-import { and, asc, eq, inArray, like } from 'drizzle-orm';
+import { and, asc, eq, inArray, like, ne } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { communities, groundProfiles, invitations, memberships, organisations, users } from '@/db/schema';
 import { listMessages } from '@/lib/mail-store';
@@ -130,7 +130,7 @@ function discover(): { keys: string[]; inlineActions: string[] } {
 const { pool, db } = testDb();
 const fx = {
   own: { organisationId: '', communitySlug: '', profileSlug: '', councilMembershipId: '', tempMembershipId: '', invitationId: '' },
-  other: { organisationId: '', communitySlug: '', profileSlug: '', membershipId: '', invitationId: '' },
+  other: { organisationId: '', communitySlug: '', profileSlug: '', membershipId: '', membershipRole: '' as string, invitationId: '' },
   messageId: '',
   tempUserId: '',
   prefix: `matrix-${Date.now().toString(36)}`,
@@ -169,8 +169,15 @@ beforeAll(async () => {
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(and(eq(users.email, PEOPLE.council), eq(memberships.organisationId, fx.own.organisationId)));
   fx.own.councilMembershipId = council.id;
-  const [otherMember] = await db.select({ id: memberships.id }).from(memberships).where(eq(memberships.organisationId, fx.other.organisationId)).limit(1);
+  // Not a council membership: the cross-organisation changeRole sends role council, so only a
+  // membership with another role can show whether that change went through.
+  const [otherMember] = await db
+    .select({ id: memberships.id, role: memberships.role })
+    .from(memberships)
+    .where(and(eq(memberships.organisationId, fx.other.organisationId), ne(memberships.role, 'council')))
+    .limit(1);
   fx.other.membershipId = otherMember.id;
+  fx.other.membershipRole = otherMember.role;
 
   // A member and two open invitations of the test's own, for the actions that change or remove them.
   fx.tempUserId = crypto.randomUUID();
@@ -311,6 +318,7 @@ describe('role matrix', () => {
   it('left the other organisation untouched', async () => {
     const [m] = await db.select({ role: memberships.role }).from(memberships).where(eq(memberships.id, fx.other.membershipId));
     expect(m, 'Cairnholm membership still there').toBeDefined();
+    expect(m!.role, 'Cairnholm role unchanged').toBe(fx.other.membershipRole);
     const [inv] = await db.select({ revokedAt: invitations.revokedAt }).from(invitations).where(inArray(invitations.id, [fx.other.invitationId]));
     expect(inv.revokedAt, 'Cairnholm invitation not revoked').toBeNull();
   });

@@ -43,6 +43,15 @@ export interface Reply {
   headers: Headers;
 }
 
+/**
+ * The text a person sees on a page: the HTML without its scripts. Every page also carries the whole
+ * message catalogue and the React payload inside <script> tags, so a check of the raw body for a
+ * message passes whatever the page shows.
+ */
+export function visibleText(html: string): string {
+  return html.replace(/<script[\s\S]*?<\/script>/gi, '').replace(/<style[\s\S]*?<\/style>/gi, '');
+}
+
 function toPath(target: string): string {
   const url = new URL(target, BASE_URL);
   return `${url.pathname}${url.search}`;
