@@ -36,7 +36,8 @@ const envSchema = z.object({
   AUTH_TRUST_HOST: flag.default(true),
 });
 
-function isLoopback(host: string): boolean {
+/** True for this machine's own addresses (127.x, ::1, localhost). */
+export function isLoopback(host: string): boolean {
   return host === 'localhost' || host === '::1' || host.startsWith('127.');
 }
 

@@ -1,6 +1,6 @@
 import 'server-only';
 import nodemailer, { type Transporter } from 'nodemailer';
-import { env } from '@/lib/env';
+import { env, isLoopback } from '@/lib/env';
 
 /**
  * Sending mail through the configured SMTP service (the local mail service in development and tests,
@@ -15,7 +15,7 @@ export function mailTransport(): Transporter {
     secure: env.SMTP_SECURE,
     auth: env.SMTP_USER ? { user: env.SMTP_USER, pass: env.SMTP_PASSWORD ?? '' } : undefined,
     // The local service offers no TLS; a real relay is configured with SMTP_SECURE.
-    ignoreTLS: !env.SMTP_SECURE && (env.SMTP_HOST === '127.0.0.1' || env.SMTP_HOST === 'localhost'),
+    ignoreTLS: !env.SMTP_SECURE && isLoopback(env.SMTP_HOST),
     connectionTimeout: 5_000,
   });
   return transporter;

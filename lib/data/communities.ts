@@ -107,12 +107,20 @@ export async function getGroundProfile(communitySlug: string, profileSlug: strin
     .limit(1);
   // A profile slug of another community is "not found" here too (the community is the actor's own).
   if (!profile) notFound();
+  // The list of versions without their documents; only the current version's site is read.
   const versions = await db
-    .select({ version: groundProfileVersions.version, createdAt: groundProfileVersions.createdAt, sourceNote: groundProfileVersions.sourceNote, site: groundProfileVersions.site, siteSha256: groundProfileVersions.siteSha256 })
+    .select({ version: groundProfileVersions.version, createdAt: groundProfileVersions.createdAt, sourceNote: groundProfileVersions.sourceNote })
     .from(groundProfileVersions)
     .where(eq(groundProfileVersions.profileId, profile.id))
     .orderBy(asc(groundProfileVersions.version));
-  const current = versions.find((v) => v.version === profile.currentVersion) ?? versions[versions.length - 1]!;
+  const [current] = await db
+    .select({ site: groundProfileVersions.site, siteSha256: groundProfileVersions.siteSha256, sourceNote: groundProfileVersions.sourceNote })
+    .from(groundProfileVersions)
+    .where(and(eq(groundProfileVersions.profileId, profile.id), eq(groundProfileVersions.version, profile.currentVersion)))
+    .limit(1);
+  // Every profile is written with its first version in one transaction (db/seed.ts); a missing
+  // current version is damaged data, not a user's mistake.
+  if (!current) throw new Error(`ground profile ${profile.id} has no version ${profile.currentVersion}`);
   return {
     id: profile.id,
     slug: profile.slug,
@@ -123,6 +131,6 @@ export async function getGroundProfile(communitySlug: string, profileSlug: strin
     site: current.site,
     siteSha256: current.siteSha256,
     sourceNote: current.sourceNote,
-    versions: versions.map((v) => ({ version: v.version, createdAt: v.createdAt.toISOString(), sourceNote: v.sourceNote })),
+    versions: versions.map((v) => ({ ...v, createdAt: v.createdAt.toISOString() })),
   };
 }

@@ -14,7 +14,10 @@ export default async function CommunitiesPage() {
       <DemoNotice show={communities.some((c) => c.isDemo)} />
       <h1 className="text-2xl font-bold">{t('title')}</h1>
       <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
-        <CommunityMap communities={communities} label={t('mapLabel')} />
+        <CommunityMap
+          communities={communities.map(({ slug, name, latitudeDeg, longitudeDeg, profileCount }) => ({ slug, name, latitudeDeg, longitudeDeg, profileCount }))}
+          label={t('mapLabel')}
+        />
         <section aria-labelledby="community-list">
           <h2 id="community-list" className="font-bold">{t('listTitle')}</h2>
           {communities.length === 0 ? (

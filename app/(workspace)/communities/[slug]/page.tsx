@@ -33,7 +33,7 @@ export default async function CommunityPage({ params }: { params: Promise<{ slug
             ))}
           </ul>
         </section>
-        <CommunityMap communities={[{ ...c, profileCount: c.profiles.length }]} selected={c.slug} label={t('mapLabel')} />
+        <CommunityMap communities={[{ slug: c.slug, name: c.name, latitudeDeg: c.latitudeDeg, longitudeDeg: c.longitudeDeg, profileCount: c.profileCount }]} selected={c.slug} label={t('mapLabel')} />
       </div>
     </main>
   );
