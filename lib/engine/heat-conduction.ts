@@ -497,6 +497,16 @@ export class HeatConductionColumn {
     this.refreshAll();
   }
 
+  /** Adds each soil cell's temperature [°C] to `acc` (one value per cell), without allocating. */
+  accumulateTemperatures(acc: Float64Array): void {
+    for (let c = 0; c < this.n; c++) acc[c] += this.t[SNOW_CELLS + c];
+  }
+
+  /** Deepest thaw since the last resetStatistics() [m] (as in statistics(), without its copies). */
+  get maxThawDepthM(): number {
+    return this.statMaxThaw;
+  }
+
   /** Copy of the soil cells' temperatures [°C]. */
   getTemperatures(): Float64Array {
     return this.t.slice(SNOW_CELLS);

@@ -382,13 +382,13 @@ function runCycleYear(
   column.resetStatistics();
   meanCell.fill(0);
   const n = column.cellCount;
+  // Spin-up and calibration run this loop for centuries: accumulate in place, no array a day.
   for (let d = 0; d < DAYS_PER_YEAR; d++) {
     column.step(SECONDS_PER_DAY, topC[d], snow[d]);
-    const t = column.getTemperatures();
-    for (let c = 0; c < n; c++) meanCell[c] += t[c];
+    column.accumulateTemperatures(meanCell);
   }
   for (let c = 0; c < n; c++) meanCell[c] /= DAYS_PER_YEAR;
-  return { maxThawM: column.statistics().maxThawDepthM };
+  return { maxThawM: column.maxThawDepthM };
 }
 
 /**
