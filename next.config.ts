@@ -1,7 +1,11 @@
 import type { NextConfig } from 'next';
 import createNextIntlPlugin from 'next-intl/plugin';
-import { env } from './lib/env';
-import { securityHeaders } from './lib/security-headers';
+import { parseEnv } from './lib/server/env-schema';
+import { securityHeaders } from './lib/server/security-headers';
+
+// The build's own configuration: the same schema as the server's (lib/server/env.ts), read here
+// because next.config runs outside the React server environment.
+const env = parseEnv(process.env);
 
 const withNextIntl = createNextIntlPlugin('./lib/i18n/request.ts');
 

@@ -9,7 +9,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'unit',
-          include: ['lib/**/*.test.ts', 'components/**/*.test.ts', 'tests/unit/**/*.test.ts', 'tests/engine-cli/**/*.test.ts', 'scripts/**/*.test.ts'],
+          include: ['lib/**/*.test.ts', 'components/**/*.test.ts', 'tests/unit/**/*.test.ts', 'tests/engine-cli/**/*.test.ts', 'engine-cli/**/*.test.ts', 'scripts/**/*.test.ts'],
           environment: 'node',
           testTimeout: 120_000,
         },

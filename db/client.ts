@@ -1,6 +1,6 @@
 import 'server-only';
 import type mysql from 'mysql2/promise';
-import { dbConfig } from '@/lib/env';
+import { dbConfig } from '@/lib/server/env';
 import { connectDb, type Db } from './connect';
 
 // One pool per server process; Next's dev server re-evaluates modules, so keep it on globalThis.

@@ -1,3 +1,4 @@
+import 'server-only';
 /**
  * Creates a Drizzle client on a mysql2 pool. The application uses db/client.ts (server-only, one pool
  * per process); scripts and tests call this directly with their own database name.

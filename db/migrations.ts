@@ -1,3 +1,4 @@
+import 'server-only';
 /**
  * Applying and checking the committed migrations in drizzle/. Used by `npm run db:migrate`, the health
  * check and the integration tests.

@@ -1,3 +1,4 @@
+import 'server-only';
 /**
  * Writes the invented demonstration region (lib/demo/nivalen.ts) into a database, idempotently: a
  * second run changes nothing, and a changed demo profile becomes a new profile version (old versions
@@ -7,10 +8,8 @@ import { and, eq } from 'drizzle-orm';
 import type { Db } from './connect';
 import { communities, groundProfiles, groundProfileVersions, memberships, organisations, users } from './schema';
 import { demoCommunities, demoOrganisations, demoUsers, DEMO_PASSWORD } from '@/lib/demo/nivalen';
-import { siteSchema } from '@/lib/engine/site-schema';
-import { formatIssues } from '@/lib/engine/validation';
-import { canonicalSha256 } from '@/lib/engine/canonical-hash';
-import { hashPassword } from '@/lib/passwords';
+import { siteSchema, formatIssues, canonicalSha256 } from '@/lib/engine';
+import { hashPassword } from '@/lib/auth/passwords';
 
 export interface SeedSummary {
   organisations: number;

@@ -1,7 +1,7 @@
 /**
  * `npm run --silent engine -- <command> < input.json > output.json` (see the engine contract).
  */
-import { runEngineCommand } from '../lib/engine/run-command';
+import { runEngineCommand } from '../engine-cli/run-command';
 
 async function readStdin(): Promise<string> {
   const chunks: Buffer[] = [];

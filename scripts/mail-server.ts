@@ -8,8 +8,8 @@ import { SMTPServer } from 'smtp-server';
 import { simpleParser, type AddressObject } from 'mailparser';
 import { randomUUID } from 'node:crypto';
 import path from 'node:path';
-import { saveMessage } from '../lib/mail-store';
-import { env } from '../lib/env';
+import { saveMessage } from '../lib/mail/store';
+import { env } from '../lib/server/env';
 
 // The same validated configuration as the app (a bad SMTP_PORT stops here with one line).
 const port = env.SMTP_PORT;

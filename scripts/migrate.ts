@@ -1,7 +1,7 @@
 /** `npm run db:migrate`: applies the committed migrations in drizzle/ to the configured database. */
 import { connectDb } from '../db/connect';
 import { applyMigrations } from '../db/migrations';
-import { dbConfig, env } from '../lib/env';
+import { dbConfig, env } from '../lib/server/env';
 
 async function main() {
   const { pool, db } = connectDb(dbConfig(), 2);

@@ -1,7 +1,7 @@
 /** `npm run db:seed`: writes the invented demo region into the configured database (idempotent). */
 import { connectDb } from '../db/connect';
 import { seedDemo } from '../db/seed';
-import { dbConfig, env } from '../lib/env';
+import { dbConfig, env } from '../lib/server/env';
 
 async function main() {
   const { pool, db } = connectDb(dbConfig(), 2);

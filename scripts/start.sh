@@ -32,12 +32,12 @@ port_in_use "$SMTP_PORT" && fail "mail port $SMTP_PORT is taken by another progr
 ensure_node_modules
 bash scripts/db.sh start
 say "Applying migrations"
-npx tsx scripts/migrate.ts
+npx tsx --require ./scripts/server-process.cjs scripts/migrate.ts
 say "Seeding the invented demo region"
-npx tsx scripts/seed.ts
+npx tsx --require ./scripts/server-process.cjs scripts/seed.ts
 
 say "Starting the local mail service on 127.0.0.1:$SMTP_PORT"
-setsid npx tsx scripts/mail-server.ts >.data/mail.log 2>&1 </dev/null &
+setsid npx tsx --require ./scripts/server-process.cjs scripts/mail-server.ts >.data/mail.log 2>&1 </dev/null &
 echo $! >.data/mail.pid
 
 say "Building the app (about a minute)"
@@ -49,7 +49,7 @@ echo $! >.data/app.pid
 node scripts/wait-for-url.mjs "http://127.0.0.1:$APP_PORT/api/health" 90 "$(cat .data/app.pid)" \
   || fail "the app did not become healthy; see .data/app.log and $APP_URL/api/health"
 
-npx tsx scripts/print-demo-sign-ins.ts "$APP_URL"
+npx tsx --require ./scripts/server-process.cjs scripts/print-demo-sign-ins.ts "$APP_URL"
 cat <<MSG
 
 Thawline is running on $APP_URL (log: .data/app.log).

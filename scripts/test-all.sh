@@ -50,9 +50,9 @@ trap cleanup EXIT
 services_ok=1
 bash scripts/db.sh start || services_ok=0
 if [ "$services_ok" = 1 ]; then
-  npx tsx scripts/migrate.ts && npx tsx scripts/seed.ts || services_ok=0
+  npx tsx --require ./scripts/server-process.cjs scripts/migrate.ts && npx tsx --require ./scripts/server-process.cjs scripts/seed.ts || services_ok=0
 fi
-setsid npx tsx scripts/mail-server.ts >"$TMPDIR/test-mail.log" 2>&1 </dev/null &
+setsid npx tsx --require ./scripts/server-process.cjs scripts/mail-server.ts >"$TMPDIR/test-mail.log" 2>&1 </dev/null &
 MAIL_PID=$!
 say "Building the app for the tests"
 if [ "$services_ok" = 1 ] && npm run --silent build >"$TMPDIR/test-build.log" 2>&1; then

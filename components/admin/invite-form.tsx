@@ -4,8 +4,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useTranslations } from 'next-intl';
-import { inviteMemberSchema, roleValues, type InviteMemberInput } from '@/lib/admin-schemas';
-import { inviteMember } from '@/app/(workspace)/admin/members/actions';
+import { inviteMemberSchema, roleValues, type InviteMemberInput } from '@/lib/schemas/admin';
+import { inviteMember } from '@/lib/actions/members';
 import { applyServerErrors, FieldError, FormMessage, inputClass, primaryButtonClass } from '@/components/auth/form-kit';
 
 export function InviteForm() {

@@ -5,8 +5,8 @@ import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useTranslations } from 'next-intl';
-import { changeRoleSchema, roleValues, type ChangeRoleInput } from '@/lib/admin-schemas';
-import { changeRole, removeMemberAction, revokeInvitationAction } from '@/app/(workspace)/admin/members/actions';
+import { changeRoleSchema, roleValues, type ChangeRoleInput } from '@/lib/schemas/admin';
+import { changeRole, removeMemberAction, revokeInvitationAction } from '@/lib/actions/members';
 import { applyServerErrors, FieldError, quietButtonClass } from '@/components/auth/form-kit';
 
 /** Role select and remove button for one member row. */

@@ -2,7 +2,7 @@
 
 import { useState, useTransition } from 'react';
 import { useTranslations } from 'next-intl';
-import { acceptInvitation } from '@/app/invite/[token]/actions';
+import { acceptInvitation } from '@/lib/actions/invitations';
 import { FormMessage, primaryButtonClass } from './form-kit';
 
 export function AcceptInvitationForm({ token }: { token: string }) {

@@ -4,8 +4,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useTranslations } from 'next-intl';
-import { emailSignInSchema, type EmailSignInInput } from '@/lib/auth-schemas';
-import { requestEmailLink } from '@/app/(auth)/sign-in/actions';
+import { emailSignInSchema, type EmailSignInInput } from '@/lib/schemas/auth';
+import { requestEmailLink } from '@/lib/actions/sign-in';
 import { applyServerErrors, FieldError, FormMessage, inputClass, primaryButtonClass } from './form-kit';
 
 export function EmailLinkForm({ returnTo }: { returnTo?: string }) {

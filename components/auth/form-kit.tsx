@@ -3,7 +3,7 @@
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
 import type { ReactNode } from 'react';
 // Type only (erased at build): the server-only module never reaches the client bundle.
-import type { ActionResult } from '@/lib/actions';
+import type { ActionResult } from '@/lib/server/validated-action';
 
 /** The shape server actions return, as the client sees it. */
 export type ClientActionResult = ActionResult<unknown> | undefined;

@@ -3,7 +3,7 @@
 import { useTransition } from 'react';
 import { useRouter } from 'next/navigation';
 import { useLocale, useTranslations } from 'next-intl';
-import { setLocaleAction } from '@/app/(workspace)/actions';
+import { setLocaleAction } from '@/lib/actions/preferences';
 import { localeNames, locales, type Locale } from '@/lib/i18n/config';
 
 export function LanguageSwitcher() {

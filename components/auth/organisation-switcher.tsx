@@ -3,7 +3,7 @@
 import { useState, useTransition } from 'react';
 import { useRouter } from 'next/navigation';
 import { useTranslations } from 'next-intl';
-import { switchOrganisationAction } from '@/app/(workspace)/actions';
+import { switchOrganisationAction } from '@/lib/actions/preferences';
 
 export interface SwitcherOption {
   organisationId: string;

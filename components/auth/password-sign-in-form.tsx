@@ -4,8 +4,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useTranslations } from 'next-intl';
-import { passwordSignInSchema, type PasswordSignInInput } from '@/lib/auth-schemas';
-import { signInWithPassword } from '@/app/(auth)/sign-in/actions';
+import { passwordSignInSchema, type PasswordSignInInput } from '@/lib/schemas/auth';
+import { signInWithPassword } from '@/lib/actions/sign-in';
 import { applyServerErrors, FieldError, FormMessage, inputClass, primaryButtonClass } from './form-kit';
 
 export function PasswordSignInForm({ returnTo }: { returnTo?: string }) {

@@ -1,5 +1,5 @@
 import { getTranslations } from 'next-intl/server';
-import { signOutAction } from '@/app/(auth)/sign-out/actions';
+import { signOutAction } from '@/lib/actions/sign-out';
 
 /** A plain form post: works before the page's JavaScript has loaded. */
 export async function SignOutButton({ className }: { className?: string }) {

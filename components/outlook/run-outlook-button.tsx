@@ -3,7 +3,7 @@
 import { useState, useTransition } from 'react';
 import { useRouter } from 'next/navigation';
 import { useTranslations } from 'next-intl';
-import { runOutlookAction } from '@/app/(workspace)/communities/[slug]/profiles/[profile]/outlook/actions';
+import { runOutlookAction } from '@/lib/actions/outlooks';
 
 /** "Run the outlook" / "Run again" for planners and admins; refreshes the page when the run ends. */
 export function RunOutlookButton({ communitySlug, profileSlug, again, help }: { communitySlug: string; profileSlug: string; again: boolean; help: string }) {

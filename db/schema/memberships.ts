@@ -4,9 +4,9 @@ import { organisations } from './organisations';
 import { users } from './users';
 
 // Relative path: drizzle-kit loads the schema without the project's path aliases.
-import { roles } from '../../lib/roles';
+import { roles } from '../../lib/schemas/roles';
 
-export { roles, type Role } from '../../lib/roles';
+export { roles, type Role } from '../../lib/schemas/roles';
 
 /** A person's role in one organisation; a person may belong to several. */
 export const memberships = mysqlTable(

@@ -1,7 +1,7 @@
 import 'server-only';
 import path from 'node:path';
-import { env } from '@/lib/env';
-import { getMessage, listMessages, type StoredMessage } from '@/lib/mail-store';
+import { env } from '@/lib/server/env';
+import { getMessage, listMessages, type StoredMessage } from '@/lib/mail/store';
 
 /**
  * The development inbox: the messages the local mail service kept. Only with DEV_INBOX set (the

@@ -1,7 +1,7 @@
 import 'server-only';
 import { pool } from '@/db/client';
 import { pendingMigrationCount } from '@/db/migrations';
-import { mailServiceReachable } from '@/lib/mail';
+import { mailServiceReachable } from '@/lib/mail/send';
 
 export interface Health {
   ok: boolean;

@@ -1,26 +1,14 @@
 import 'server-only';
-import { createHash, randomBytes } from 'node:crypto';
+import { randomBytes } from 'node:crypto';
 import { and, asc, eq, gt, isNull } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { invitations, memberships, organisations, users, type Role } from '@/db/schema';
-import { env } from '@/lib/env';
-import { sendMail } from '@/lib/mail';
-import { consume } from '@/lib/rate-limit';
-import { recordAuditEvent } from './audit';
+import { env } from '@/lib/server/env';
+import { sendMail } from '@/lib/mail/send';
+import { consume } from '@/lib/server/rate-limit';
+import { recordAuditEvent } from './core/audit-log';
+import { hashToken, INVITATION_MAX_AGE_MS } from './core/invitation-acceptance';
 import { notFoundUnlessOwn, requireActor, ROLES } from './session';
-
-/** Invitations expire after 7 days (common practice for account invitations) and work once. */
-export const INVITATION_MAX_AGE_MS = 7 * 24 * 60 * 60 * 1000;
-
-export function hashToken(token: string): string {
-  return createHash('sha256').update(token).digest('hex');
-}
-
-export class InvitationError extends Error {
-  constructor(public readonly reason: 'invalid' | 'expired' | 'used' | 'revoked') {
-    super(`invitation ${reason}`);
-  }
-}
 
 export interface PendingInvitationDto {
   invitationId: string;
@@ -125,34 +113,4 @@ export async function previewInvitation(token: string): Promise<InvitationPrevie
   if (row.revokedAt) return { status: 'revoked' };
   if (row.expiresAt.getTime() <= Date.now()) return { status: 'expired' };
   return { status: 'valid', organisationName: row.organisationName, role: row.role, email: row.email };
-}
-
-/**
- * Accepts an invitation and returns the person to sign in (the Auth.js "invitation" provider calls
- * this). In one transaction with the invitation row locked: checks it is open, creates the user if the
- * address is new (the mailed token proves the address), adds the membership, marks it used.
- */
-export async function acceptInvitationForSignIn(token: string, ip: string): Promise<{ id: string; email: string; name: string | null }> {
-  return db.transaction(async (tx) => {
-    const [inv] = await tx.select().from(invitations).where(eq(invitations.tokenSha256, hashToken(token))).for('update');
-    if (!inv) throw new InvitationError('invalid');
-    if (inv.acceptedAt) throw new InvitationError('used');
-    if (inv.revokedAt) throw new InvitationError('revoked');
-    if (inv.expiresAt.getTime() <= Date.now()) throw new InvitationError('expired');
-
-    let [user] = await tx.select({ id: users.id, email: users.email, name: users.name, emailVerified: users.emailVerified }).from(users).where(eq(users.email, inv.email)).limit(1);
-    if (!user) {
-      const id = crypto.randomUUID();
-      await tx.insert(users).values({ id, email: inv.email, emailVerified: new Date() });
-      user = { id, email: inv.email, name: null, emailVerified: new Date() };
-    } else if (!user.emailVerified) {
-      await tx.update(users).set({ emailVerified: new Date() }).where(eq(users.id, user.id));
-    }
-    const [member] = await tx.select({ id: memberships.id }).from(memberships).where(and(eq(memberships.organisationId, inv.organisationId), eq(memberships.userId, user.id))).limit(1);
-    // Someone who is already a member keeps the role an admin gave them since.
-    if (!member) await tx.insert(memberships).values({ organisationId: inv.organisationId, userId: user.id, role: inv.role });
-    await tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, inv.id));
-    await recordAuditEvent({ event: 'invitation.accepted', organisationId: inv.organisationId, actorUserId: user.id, subject: inv.email, detail: { role: inv.role }, ip }, tx);
-    return { id: user.id, email: user.email, name: user.name };
-  });
 }

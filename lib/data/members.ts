@@ -2,7 +2,7 @@ import 'server-only';
 import { and, asc, eq } from 'drizzle-orm';
 import { db, type Tx } from '@/db/client';
 import { memberships, users, type Role } from '@/db/schema';
-import { recordAuditEvent } from './audit';
+import { recordAuditEvent } from './core/audit-log';
 import { notFoundUnlessOwn, requireActor, ROLES, type Actor } from './session';
 
 export interface MemberDto {

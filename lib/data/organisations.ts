@@ -1,6 +1,6 @@
 import 'server-only';
 import { cookies } from 'next/headers';
-import { preferenceCookieOptions } from '@/lib/env';
+import { preferenceCookieOptions } from '@/lib/server/env';
 import { ACTIVE_ORGANISATION_COOKIE, requireActor } from './session';
 
 /**

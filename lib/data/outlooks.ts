@@ -3,14 +3,13 @@ import { and, desc, eq } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { communities, groundProfiles, groundProfileVersions, outlooks, users } from '@/db/schema';
 import { z } from 'zod';
-import { ENGINE_VERSION, runAssessment } from '@/lib/engine/assess';
-import { formatIssues } from '@/lib/engine/validation';
+import { ENGINE_VERSION, runAssessment, formatIssues } from '@/lib/engine';
 import { outlookInput, outlookInputSha256 } from '@/lib/outlook/input';
 import { outlookResultSchema, type OutlookResult } from '@/lib/outlook/result';
-import { findOutlookByKey, storeOutlook } from './outlook-store';
+import { findOutlookByKey, storeOutlook } from './core/outlook-store';
 import { notFoundUnlessOwn, requireActor, ROLES, type Actor } from './session';
 
-export { storeOutlook, OutlookStoreRefused, type OutlookContext, type StoreOutlookInput } from './outlook-store';
+export { storeOutlook, OutlookStoreRefused, type OutlookContext, type StoreOutlookInput } from './core/outlook-store';
 
 /**
  * Outlooks of ground profiles: the engine's assessment of a profile's current version under every

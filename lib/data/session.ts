@@ -5,8 +5,8 @@ import { forbidden, notFound, redirect } from 'next/navigation';
 import { and, asc, eq, gt } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { memberships, organisations, roles, sessions, users, type Role } from '@/db/schema';
-import { auth } from '@/lib/auth';
-import { safeReturnPath } from '@/lib/auth-schemas';
+import { auth } from '@/lib/auth/auth';
+import { safeReturnPath } from '@/lib/schemas/auth';
 
 /**
  * THE authorization core. Every data module asks here who is acting, in which organisation and with

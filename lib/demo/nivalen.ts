@@ -10,7 +10,7 @@
  * snowpacks (Sturm, Holmgren & Liston 1995, J. Climate 8, snow classes; from memory); dry densities and
  * water contents that fit together (solids + water ≤ 1); ice classes in ASTM D4083 codes.
  */
-import type { SiteInput } from '@/lib/engine/site-schema';
+import type { SiteInput } from '@/lib/engine';
 import type { Role } from '@/db/schema/memberships';
 
 export const DEMO_REGION_NAME = 'Nivalen region (invented)';

@@ -1,5 +1,5 @@
 /**
- * Sanity checks of the assessment (issue 3) on the production path (runAssessment / site model):
+ * Sanity checks of the assessment on the production path (runAssessment / site model):
  * a higher scenario never gives a thinner seasonal thaw, settlement never decreases, more snow
  * never gives colder ground, calibration meets its targets; workers and the cache change nothing.
  */
@@ -38,7 +38,7 @@ describe('assessment: five scenarios, three horizons', () => {
     await closeAssessPool();
   });
 
-  it('a higher scenario never gives a thinner seasonal thaw, at every horizon (issue 3 sanity check)', () => {
+  it('a higher scenario never gives a thinner seasonal thaw, at every horizon (sanity check)', () => {
     // Order by the emulator's global warming over the window: the scenarios' forcing is not ordered
     // in the 2020s (AR6 WG1 ch. 7: SSP3-7.0 2.76 < SSP1-2.6 2.80 W m-2 in 2020, from the issue), so
     // "higher" means warmer over the window; from 2050 on this is the SSP order (AR6 SPM Table SPM.1).
@@ -72,13 +72,13 @@ describe('assessment: five scenarios, three horizons', () => {
   // Issue 3: the spin-up is bounded and reports non-convergence; here it must have converged.
   it('the spin-up converged and the solver converged in every step', () => {
     expect(out.site_model.spin_up.converged).toBe(true);
-    // Convergence criterion of issue 3: the annual-mean profile changes < 0.01 °C a year.
+    // Convergence criterion of the spin-up: the annual-mean profile changes < 0.01 °C a year.
     expect(out.site_model.spin_up.max_change_k).toBeLessThan(SPINUP_TOLERANCE_K);
     expect(out.site_model.non_converged_solver_steps).toBe(0);
   });
 
   it('the worker thread and the in-process path give identical results; the cache gives identical output', async () => {
-    // Parallel runs and caching must not change a number (common practice; issue 3 asks for both).
+    // Parallel runs and caching must not change a number (common practice).
     // Two scenarios in-process, history from the cache.
     const inProcess = await runAssessment({ site: site(), scenarios: ['SSP1-2.6', 'SSP5-8.5'], horizons: [2030, 2050, 2080] }, { cache, useWorkers: false });
     expect(inProcess.stats.cacheHit).toBe(true);
@@ -111,7 +111,7 @@ describe('assessment: five scenarios, three horizons', () => {
   });
 });
 
-describe('snow: more snow never gives colder ground (issue 3 sanity check)', () => {
+describe('snow: more snow never gives colder ground (sanity check)', () => {
   // Snow insulates the ground in winter and warms it (Goodrich 1982, Can. Geotech. J. 19,
   // doi:10.1139/t82-047); the summer snow-free season is unchanged, so deeper snow cannot cool it.
   it('equilibrium annual-mean ground temperature rises with snow depth at every depth', () => {
@@ -123,7 +123,7 @@ describe('snow: more snow never gives colder ground (issue 3 sanity check)', () 
       const r = spinUp(column, p, { ...defaultSurfaceParameters(p), snowDepthFactor: factor }, normals);
       expect(r.converged).toBe(true);
       const mean = column.statistics().meanTemperatureC;
-      // Allowance: the spin-up's own convergence criterion, 0.01 K a year (issue 3).
+      // Allowance: the spin-up's own convergence criterion, 0.01 K a year.
       if (previous) for (let i = 0; i < mean.length; i++) expect(mean[i]).toBeGreaterThanOrEqual(previous[i] - SPINUP_TOLERANCE_K);
       previous = mean;
     }
@@ -145,7 +145,7 @@ describe('snow: more snow never gives colder ground (issue 3 sanity check)', () 
   });
 });
 
-describe('calibration meets its targets when observations are given (issue 3: MAGT within 0.5 °C, ALT within 20 %)', () => {
+describe('calibration meets its targets when observations are given (MAGT within 0.5 °C, ALT within 20 %)', () => {
   it('ALT and MAGT observed together', () => {
     const s = site();
     s.observed = { active_layer_thickness_m: 0.6, magt_c: -4.5, magt_depth_m: 10 };
@@ -173,7 +173,7 @@ describe('talik (drifted snow beside buildings, SSP5-8.5)', () => {
     expect(r.talik_onset_year!).toBeLessThanOrEqual(2060);
     expect(r.permafrost_table_m).toBeGreaterThan(r.seasonal_thaw_m);
     // Year by year: a talik year has its table below the seasonal thaw by at least the talik's 0.2 m
-    // (issue 3's minimum thickness).
+    // (the talik's minimum thickness).
     const talikYears = (o.annual as { talik: boolean; permafrost_table_m: number | null; seasonal_thaw_m: number }[]).filter(
       (a) => a.talik && a.permafrost_table_m !== null,
     );

@@ -1,6 +1,6 @@
 /**
  * The assessment orchestrator: one community ground profile under scenarios and planning horizons
- * (the `assess` command of the engine contract, /work/shared/engine-contract.md).
+ * (the `assess` command of the engine contract, docs/engine-contract.md).
  *
  * API:
  * - `assessInputSchema` (zod): `{ site, scenarios, horizons, permafrost_carbon_feedback? }`.

@@ -106,9 +106,9 @@ export const SETTLEMENT_HIGH_M = 0.3;
 export const ICE_RICH_THAW_STRAIN = 0.1;
 /** Thickness of ground below the permafrost table examined for ice-rich ground [m]: 2 (the transition zone, Shur, Hinkel & Nelson 2005, doi:10.1002/ppp.518; common practice). */
 export const TRANSITION_ZONE_THICKNESS_M = 2;
-/** Minimum thickness of a talik [m]: 0.2 (issue 3's definition, common practice). */
+/** Minimum thickness of a talik [m]: 0.2 (common practice). */
 export const TALIK_MIN_THICKNESS_M = 0.2;
-/** Spin-up convergence: the annual-mean profile changes by less than this per year [K]: 0.01 (issue 3, common practice). */
+/** Spin-up convergence: the annual-mean profile changes by less than this per year [K]: 0.01 (common practice). */
 export const SPINUP_TOLERANCE_K = 0.01;
 /** Upper bound on spin-up years (after the accelerated start) [yr]: 400 (a bound of this engine). */
 export const SPINUP_MAX_YEARS = 400;

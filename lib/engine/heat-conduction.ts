@@ -904,7 +904,7 @@ export class HeatConductionColumn {
    * below the permafrost base is therefore not a talik, nor is ground where no permafrost remains.
    * @param minEnthalpyJm3 Per-cell minimum enthalpy over the period [J m-3].
    * @param maxEnthalpyJm3 Per-cell maximum enthalpy over the period [J m-3].
-   * @param minThicknessM Smallest talik thickness [m], default 0.2 (issue 3).
+   * @param minThicknessM Smallest talik thickness [m], default 0.2 (common practice).
    * @returns The shallowest talik, or null.
    */
   detectTalik(minEnthalpyJm3: Float64Array, maxEnthalpyJm3: Float64Array, minThicknessM = 0.2): TalikInfo | null {

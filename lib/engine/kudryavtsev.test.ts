@@ -3,7 +3,7 @@
  * committed in kudryavtsev-test-sites.json before the solver was written or tuned.
  */
 import { describe, expect, it } from 'vitest';
-import sites from './kudryavtsev-test-sites.json';
+import sites from '../../tests/fixtures/engine/kudryavtsev-test-sites.json';
 import { activeLayerKudryavtsev, temperatureTopOfPermafrostKudryavtsev } from './kudryavtsev';
 import { buildColumnGrid } from './grid';
 import { HeatConductionColumn, isothermalMaterial } from './heat-conduction';
@@ -63,12 +63,12 @@ describe('activeLayerKudryavtsev (Romanovsky & Osterkamp 1997; Anisimov, Shiklom
       expect(k.activeLayerThicknessM!).toBeGreaterThan(0);
       expect(n.alt).toBeGreaterThan(0);
     });
-    (known ? it.fails : it)(`${s.name}: within ${sites.tolerance_relative * 100} % of the numerical thaw depth (issue 3)`, () => {
+    (known ? it.fails : it)(`${s.name}: within ${sites.tolerance_relative * 100} % of the numerical thaw depth`, () => {
       const k = kudryavtsev(s);
       const n = numerical(s);
       expect(Math.abs(k.activeLayerThicknessM! / n.alt - 1)).toBeLessThanOrEqual(sites.tolerance_relative);
     });
-    it(`${s.name}: temperature at the top of permafrost within 0.5 K of the numerical mean at 10 m (issue 3's MAGT tolerance)`, () => {
+    it(`${s.name}: temperature at the top of permafrost within 0.5 K of the numerical mean at 10 m (the calibration's MAGT tolerance)`, () => {
       const k = kudryavtsev(s);
       const n = numerical(s);
       expect(Math.abs(k.temperatureTopC - n.magt)).toBeLessThanOrEqual(0.5);
@@ -93,7 +93,7 @@ describe('activeLayerKudryavtsev (Romanovsky & Osterkamp 1997; Anisimov, Shiklom
     expect(temperatureTopOfPermafrostKudryavtsev(ts, as, kt, kf)).toBeCloseTo(num / (num <= 0 ? kf : kt), 6);
   });
 
-  it('|T_s| ≥ A_s: no thaw, or no permafrost; never NaN (issue 3)', () => {
+  it('|T_s| ≥ A_s: no thaw, or no permafrost; never NaN', () => {
     const base = { conductivityThawedWmK: 1, conductivityFrozenWmK: 2, heatCapacityThawedJm3K: 2.5e6, heatCapacityFrozenJm3K: 2e6, latentHeatJm3: 1e8 };
     const cold = activeLayerKudryavtsev({ ...base, meanSurfaceC: -12, amplitudeSurfaceC: 10 });
     expect(cold).toEqual({ temperatureTopC: -12, permafrost: true, activeLayerThicknessM: 0, seasonalFreezingDepthM: null });

@@ -26,7 +26,7 @@ describe('n-factors (UFC 3-130-04 / TM 5-852-4; Lunardini 1978; Klene et al. 200
     for (const c of ['tundra', 'shrub_tundra', 'forest', 'peat'] as const) {
       expect(N_FACTORS[c].snowCleared).toBe(false);
       expect(N_FACTORS[c].thawing).toBeLessThan(1);
-      // issue 3: with snow modelled, the vegetation's freezing n-factor (which includes snow) is not applied
+      // With snow modelled, the vegetation's freezing n-factor (which includes snow) is not applied
       expect(freezingNFactorWithExplicitSnow(c)).toBe(1);
     }
   });

@@ -42,10 +42,10 @@ describe('column', () => {
 describe('surface forcing', () => {
   const base = { nThaw: 0.85, nFreeze: 0.5, snowDepthFactor: 1, snowDensityShiftKgM3: 0 };
   const snow = { thicknessM: 0.3, conductivityWmK: 0.18, heatCapacityJm3K: 7e5 };
-  it('n-factors: n_t on thawing days; n_f only where snow is not modelled (issue 3; Lunardini 1978)', () => {
+  it('n-factors: n_t on thawing days; n_f only where snow is not modelled (Lunardini 1978)', () => {
     expect(surfaceTemperatureC(10, null, base, true)).toBeCloseTo(8.5, 12);
     // Vegetated cover, snow modelled, a snow-free freezing day: the table's n_f already includes
-    // snow, so it must not be applied (issue 3): the air temperature is imposed.
+    // snow, so it must not be applied: the air temperature is imposed.
     expect(surfaceTemperatureC(-10, null, base, true)).toBe(-10);
     // Snow-cleared cover (no snow modelled): n_f applies.
     expect(surfaceTemperatureC(-10, null, base, false)).toBeCloseTo(-5, 12);
@@ -65,7 +65,7 @@ describe('surface forcing', () => {
     expect(covers[MONTH_START_DAY[2]]!.conductivityWmK).toBeCloseTo(0.138 - 1.01 * 0.35 + 3.233 * 0.35 ** 2, 10);
     const plus = prepareSite(site((x) => (x.snow.scenario_case = 'plus_30')));
     const coversPlus = dailySnowCovers(plus, defaultSurfaceParameters(plus));
-    // The +30 % case (issue 3): every snow depth × 1.3.
+    // The +30 % case: every snow depth × 1.3.
     expect(coversPlus[MONTH_START_DAY[2]]!.thicknessM).toBeCloseTo(1.3 * covers[MONTH_START_DAY[2]]!.thicknessM, 12);
     // A snow-cleared cover carries no snow at all (n-factors.ts: roads, airstrips, pads).
     const road = prepareSite(site((x) => (x.surface.cover = 'paved_road')));

@@ -118,7 +118,7 @@ export interface PrepareOptions {
   permafrostCarbonFeedback?: boolean;
 }
 
-/** Depth factors of the snow cases (issue 3: ±30 %; drifted: doubled, an illustrative case). */
+/** Depth factors of the snow cases (±30 %; drifted: doubled, an illustrative case). */
 export const SNOW_CASE_FACTORS = { baseline: 1, plus_30: 1.3, minus_30: 0.7, drifted: 2 } as const;
 
 /**
@@ -229,7 +229,7 @@ export function surfaceTemperatureC(airC: number, snow: SnowCover | null, params
   if (snow) return airC;
   if (airC > 0) return params.nThaw * airC;
   // Freezing n-factor only where snow is not modelled (snow-cleared covers); vegetated covers use
-  // the explicit snow layer instead (issue 3).
+  // the explicit snow layer instead.
   return snowModelled ? airC : params.nFreeze * airC;
 }
 
@@ -635,7 +635,7 @@ export interface CalibrationReport {
   targets: { active_layer_thickness_m?: number; magt_c?: number; magt_depth_m?: number };
   /** Modelled values over the baseline period after calibration (transient run). */
   achieved: { active_layer_thickness_m?: number; magt_c?: number };
-  /** Tolerances (issue 3): ALT within 20 %, MAGT within 0.5 °C. */
+  /** Calibration tolerances (common practice for screening): ALT within 20 %, MAGT within 0.5 °C. */
   tolerance: { active_layer_relative: 0.2; magt_k: 0.5 };
   /** Parameters used, and their allowed ranges. */
   parameters: {

@@ -1,8 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { runAssessment } from '@/lib/engine/assess';
-import { exampleSite } from '@/lib/engine/site-schema';
+import { runAssessment, exampleSite, canonicalSha256 } from '@/lib/engine';
 import { outlookInput, outlookInputSha256 } from './input';
-import { canonicalSha256 } from '@/lib/engine/canonical-hash';
 import { outlookResultSchema } from './result';
 import { buildSummary } from './summary';
 

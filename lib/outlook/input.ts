@@ -2,8 +2,7 @@
  * The engine input of an outlook and its fingerprint. Server and tests only (it imports the engine's
  * schema); client components must not import this file.
  */
-import { canonicalSha256 } from '@/lib/engine/canonical-hash';
-import { assessInputSchema, type AssessInput } from '@/lib/engine/assess';
+import { canonicalSha256, assessInputSchema, type AssessInput } from '@/lib/engine';
 import { OUTLOOK_HORIZONS, OUTLOOK_SCENARIOS } from './scenarios';
 
 /** Every scenario (low → high) and the three planning horizons, on one site document. */

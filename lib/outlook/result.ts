@@ -1,5 +1,5 @@
 /**
- * The parts of the engine's stored `assess` document (engine contract, /work/shared/engine-contract.md)
+ * The parts of the engine's stored `assess` document (engine contract, docs/engine-contract.md)
  * that the outlook page shows, read with zod so that a stored document of an older engine version
  * that lacks a field fails loudly instead of drawing nonsense. Unknown fields are dropped: the page
  * gets only what it shows.

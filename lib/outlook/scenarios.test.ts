@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SCENARIOS, SCENARIO_EMISSIONS_WORDS } from '@/lib/engine/scenario-forcing';
+import { SCENARIOS, SCENARIO_EMISSIONS_WORDS } from '@/lib/engine';
 import { BASELINE_STYLE, OUTLOOK_SCENARIOS, SCENARIO_STYLES, orderScenarios } from './scenarios';
 import en from '@/messages/en.json';
 

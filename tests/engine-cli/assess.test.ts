@@ -1,6 +1,6 @@
 /**
  * The `assess` command through the real CLI (`npm run --silent engine -- assess`), as the engine
- * contract (../shared/engine-contract.md) specifies: JSON in on stdin, JSON out on stdout with the
+ * contract (docs/engine-contract.md) specifies: JSON in on stdin, JSON out on stdout with the
  * listed fields and never NaN or Infinity; bad input exits 2 with one line naming the field on
  * stderr and nothing on stdout. A short run (one scenario, one horizon) keeps the test quick.
  */

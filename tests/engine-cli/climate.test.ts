@@ -1,6 +1,6 @@
 /**
  * The `climate` command through the real CLI (`npm run --silent engine -- climate`), as the engine
- * contract (../shared/engine-contract.md) specifies: JSON in on stdin, JSON out on stdout; bad input
+ * contract (docs/engine-contract.md) specifies: JSON in on stdin, JSON out on stdout; bad input
  * exits 2 with one line naming the field on stderr and nothing on stdout.
  */
 import { spawnSync } from 'node:child_process';

@@ -1,6 +1,6 @@
 /**
  * The `ground` command through the real CLI (`npm run --silent engine -- ground`), checked against
- * the engine contract (../shared/engine-contract.md) and against analytical solutions of heat
+ * the engine contract (docs/engine-contract.md) and against analytical solutions of heat
  * conduction (Carslaw & Jaeger 1959, Conduction of Heat in Solids, 2nd ed.).
  */
 import { spawnSync } from 'node:child_process';

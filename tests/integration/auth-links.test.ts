@@ -1,13 +1,13 @@
 /**
  * E-mail sign-in links and invitation links that are expired, reused or forged; malformed addresses;
- * oversize bodies; the password rate limit. Each must get a clear message and never a 500 (issue 4).
+ * oversize bodies; the password rate limit. Each must get a clear message and never a 500.
  * Against the running application, its local mail service and the real database.
  */
 import { eq, inArray, like } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { invitations, memberships, organisations, users, verificationTokens } from '@/db/schema';
-import { listMessages } from '@/lib/mail-store';
-import { hashPassword } from '@/lib/passwords';
+import { listMessages } from '@/lib/mail/store';
+import { hashPassword } from '@/lib/auth/passwords';
 import { AppClient, BASE_URL, ensureAppRunning, forgedToken, MAIL_STORE_DIR, testDb, uniqueAddress, visibleText } from './helpers/app-client';
 
 const { pool, db } = testDb();

@@ -1,13 +1,13 @@
 /**
  * A member removed or demoted by an admin loses access on the very next request, although their
- * session cookie is unchanged (issue 4: "a token session must not keep a removed member or an old role
+ * session cookie is unchanged ("a token session must not keep a removed member or an old role
  * alive"). The last admin cannot remove or demote themself. Switching organisation changes what is
  * visible. Against the running application and the real database.
  */
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { communities, memberships, organisations, users } from '@/db/schema';
-import { hashPassword } from '@/lib/passwords';
+import { hashPassword } from '@/lib/auth/passwords';
 import { AppClient, ensureAppRunning, testDb, visibleText } from './helpers/app-client';
 
 const { pool, db } = testDb();

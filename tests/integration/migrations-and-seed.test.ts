@@ -5,7 +5,7 @@ import { applyMigrations, pendingMigrationCount } from '@/db/migrations';
 import { seedDemo } from '@/db/seed';
 import { communities, groundProfiles, groundProfileVersions, memberships, organisations, users } from '@/db/schema';
 import { demoCommunities } from '@/lib/demo/nivalen';
-import { verifyPassword } from '@/lib/passwords';
+import { verifyPassword } from '@/lib/auth/passwords';
 
 let t: ThrowawayDb;
 

@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { and, asc, eq } from 'drizzle-orm';
 import { seedDemo } from '@/db/seed';
 import { communities, groundProfiles, groundProfileVersions, organisations, outlooks, users } from '@/db/schema';
-import { OutlookStoreRefused, storeOutlook, type StoreOutlookInput } from '@/lib/data/outlook-store';
+import { OutlookStoreRefused, storeOutlook, type StoreOutlookInput } from '@/lib/data/core/outlook-store';
 import { createThrowawayDb, type ThrowawayDb } from './throwaway-db';
 
 let t: ThrowawayDb;

@@ -7,8 +7,8 @@
  *     Regional Office) sends the request and checks the status; rows with an id are tried with an id
  *     of the person's own organisation and with one of another organisation (Cairnholm).
  *
- * The expected behaviour is the product's rule (../shared/product.md: "Every organisation sees only its
- * own communities, drafts and members") and issue 4 (404 for another organisation's things, 403 for a
+ * The expected behaviour is the product's rule (docs/product.md: "Every organisation sees only its
+ * own communities, drafts and members"): 404 for another organisation's things, 403 for a
  * known thing the role may not touch); the statuses are HTTP semantics (RFC 9110 §15).
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
@@ -17,7 +17,7 @@ import nodemailer from 'nodemailer';
 import { and, asc, eq, inArray, like, ne } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { communities, groundProfiles, invitations, memberships, organisations, users } from '@/db/schema';
-import { listMessages } from '@/lib/mail-store';
+import { listMessages } from '@/lib/mail/store';
 import { AppClient, ensureAppRunning, BASE_URL, forgedToken, MAIL_STORE_DIR, testDb, uniqueAddress, type Reply } from './helpers/app-client';
 
 const ROOT = process.cwd();

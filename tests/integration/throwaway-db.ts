@@ -6,7 +6,7 @@ import mysql from 'mysql2/promise';
 import { randomBytes } from 'node:crypto';
 import { connectDb, type Db } from '@/db/connect';
 import { applyMigrations } from '@/db/migrations';
-import { dbConfig, dbServerConfig } from '@/lib/env';
+import { dbConfig, dbServerConfig } from '@/lib/server/env';
 
 export interface ThrowawayDb {
   name: string;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { demoCommunities } from '@/lib/demo/nivalen';
-import { runAssessment } from '@/lib/engine/assess';
+import { runAssessment } from '@/lib/engine';
 
 /**
  * Plausibility of the invented demo region as the engine sees it (issue: foundation seed). The region is

@@ -4,8 +4,7 @@ import { feature } from 'topojson-client';
 import type { Topology, GeometryCollection } from 'topojson-specification';
 import land50 from 'world-atlas/land-50m.json';
 import { demoCommunities, demoOrganisations, demoUsers } from '@/lib/demo/nivalen';
-import { siteSchema } from '@/lib/engine/site-schema';
-import { formatIssues } from '@/lib/engine/validation';
+import { siteSchema, formatIssues } from '@/lib/engine';
 import { validateDemoProfiles } from '@/db/seed';
 
 const land = feature(land50 as unknown as Topology, (land50 as unknown as Topology).objects.land as GeometryCollection);

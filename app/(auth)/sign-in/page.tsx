@@ -4,7 +4,7 @@ import { getTranslations } from 'next-intl/server';
 import { EmailLinkForm } from '@/components/auth/email-link-form';
 import { FormMessage } from '@/components/auth/form-kit';
 import { PasswordSignInForm } from '@/components/auth/password-sign-in-form';
-import { safeReturnPath } from '@/lib/auth-schemas';
+import { safeReturnPath } from '@/lib/schemas/auth';
 import { getSignedInUser } from '@/lib/data/session';
 
 export const metadata: Metadata = { title: 'Sign in' };

@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { getTranslations } from 'next-intl/server';
 import { AcceptInvitationForm } from '@/components/auth/accept-invitation-form';
-import { invitationTokenSchema } from '@/lib/auth-schemas';
+import { invitationTokenSchema } from '@/lib/schemas/auth';
 import { previewInvitation, type InvitationStatus } from '@/lib/data/invitations';
 
 export const metadata: Metadata = { title: 'Invitation', referrer: 'no-referrer' };

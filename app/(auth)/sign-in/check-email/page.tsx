@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { getTranslations } from 'next-intl/server';
-import { env } from '@/lib/env';
+import { env } from '@/lib/server/env';
 
 export const metadata: Metadata = { title: 'Check your e-mail' };
 

@@ -1,7 +1,7 @@
 import Link from 'next/link';
 import { getTranslations } from 'next-intl/server';
 import { getGroundProfile } from '@/lib/data/communities';
-import { siteSchema } from '@/lib/engine/site-schema';
+import { siteSchema } from '@/lib/engine';
 import { DemoNotice } from '@/components/community/demo-badge';
 
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];

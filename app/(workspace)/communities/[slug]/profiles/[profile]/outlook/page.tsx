@@ -4,7 +4,7 @@ import { getLocale, getTranslations } from 'next-intl/server';
 import { getGroundProfile } from '@/lib/data/communities';
 import { getOutlook, type OutlookView } from '@/lib/data/outlooks';
 import { hasRole, requireActor, ROLES } from '@/lib/data/session';
-import { SETTLEMENT_HIGH_M, SETTLEMENT_MODERATE_M, VERY_WARM_PERMAFROST_C, WARM_PERMAFROST_C } from '@/lib/engine/constants';
+import { SETTLEMENT_HIGH_M, SETTLEMENT_MODERATE_M, VERY_WARM_PERMAFROST_C, WARM_PERMAFROST_C } from '@/lib/engine';
 import { airSeries, envelopeSeries, thawSeries } from '@/lib/outlook/chart-data';
 import type { BaselineResult, HazardLevel, OutlookResult, WindowResult } from '@/lib/outlook/result';
 import { formatDepth, formatIndex, formatNumber, formatTemperature, settlementReading } from '@/lib/outlook/rounding';
