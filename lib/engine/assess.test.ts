@@ -186,3 +186,15 @@ describe('talik (drifted snow beside buildings, SSP5-8.5)', () => {
     expect(r.not_modelled).toEqual(['snow_drifts']);
   });
 });
+
+describe('progress', () => {
+  it('reports the stages in order, every scenario once, and fractions that never go back', async () => {
+    const seen: { fraction: number; stage: string; scenariosDone?: number }[] = [];
+    await runAssessment({ site: exampleSite, scenarios: ['SSP1-2.6', 'SSP5-8.5'], horizons: [2050] }, { cache: null, onProgress: (p) => seen.push(p) });
+    expect(seen.map((p) => p.stage)).toEqual(['history', 'scenarios', 'scenarios', 'scenarios', 'summary']);
+    expect(seen.filter((p) => p.stage === 'scenarios').map((p) => p.scenariosDone)).toEqual([0, 1, 2]);
+    for (let i = 1; i < seen.length; i++) expect(seen[i].fraction).toBeGreaterThan(seen[i - 1].fraction);
+    expect(seen[0].fraction).toBe(0);
+    expect(seen.at(-1)!.fraction).toBeLessThan(1);
+  });
+});

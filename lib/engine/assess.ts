@@ -137,7 +137,21 @@ export interface AssessOptions {
   useWorkers?: boolean;
   /** Number of worker threads beside the main thread (default DEFAULT_WORKER_THREADS). */
   workerThreads?: number;
+  /** Told how far the run is, at each stage and after each scenario (for a job's progress bar). */
+  onProgress?: (progress: AssessProgress) => void;
 }
+
+/** How far a run is: `fraction` 0–1 of the expected work, and the stage it is in. */
+export interface AssessProgress {
+  fraction: number;
+  stage: 'history' | 'scenarios' | 'summary';
+  /** Scenarios finished and in all (stage "scenarios"). */
+  scenariosDone?: number;
+  scenariosTotal?: number;
+}
+
+/** Share of a cold run's time that the spin-up and 1850–2014 history take (measured, bench:engine). */
+const HISTORY_SHARE = 0.3;
 
 /**
  * Worker threads beside the main thread: 2. On the 2-core machine three threads share two cores;
@@ -327,16 +341,22 @@ export async function runAssessment(raw: AssessInput | AssessParsed, options: As
   // Start the workers first, so their start-up overlaps the history on the main thread.
   const workersReady = pool && workerCount > 0 ? pool.start(workerCount) : Promise.resolve(0);
 
+  const report = options.onProgress ?? (() => {});
   const p = prepareSite(site, { permafrostCarbonFeedback: feedback });
   const key = profileHash(site, feedback);
   const t0 = performance.now();
   let history = cache?.get(key);
   const cacheHit = !!history;
+  report({ fraction: 0, stage: 'history' });
   if (!history) {
     history = computeHistory(p);
     cache?.set(key, history);
   }
   const t1 = performance.now();
+  const historyShare = cacheHit ? 0 : HISTORY_SHARE;
+  const scenarioDone = () =>
+    report({ fraction: historyShare + ((1 - historyShare) * 0.95 * results.size) / scenarios.length, stage: 'scenarios', scenariosDone: results.size, scenariosTotal: scenarios.length });
+  report({ fraction: historyShare, stage: 'scenarios', scenariosDone: 0, scenariosTotal: scenarios.length });
 
   // Scenarios from a shared queue: the main thread takes one at a time and yields between them, so
   // that each worker, once it has started (its start-up overlaps the history), takes the next one.
@@ -359,6 +379,7 @@ export async function runAssessment(raw: AssessInput | AssessParsed, options: As
                   const r = await pool!.run(slot, { ...workerJob, scenarios: [s] });
                   results.set(s, r[0].records);
                   workerScenarios++;
+                  scenarioDone();
                 } catch (e) {
                   workerFallback = (e as Error).message;
                   queue.push(s);
@@ -375,13 +396,18 @@ export async function runAssessment(raw: AssessInput | AssessParsed, options: As
   while (queue.length > 0) {
     const s = queue.shift()!;
     results.set(s, runScenario(p, h, s, lastYear));
+    scenarioDone();
     // Let worker replies and readiness through before taking the next scenario.
     await new Promise<void>((resolve) => setImmediate(resolve));
   }
   await workerLoops;
   // Scenarios handed back by a failed worker after the main loop ended.
-  for (const s of queue.splice(0)) results.set(s, runScenario(p, h, s, lastYear));
+  for (const s of queue.splice(0)) {
+    results.set(s, runScenario(p, h, s, lastYear));
+    scenarioDone();
+  }
   const t2 = performance.now();
+  report({ fraction: 0.97, stage: 'summary' });
 
   const output = assembleOutput(input, p, history, results, horizons, key);
   return {

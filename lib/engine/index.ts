@@ -4,7 +4,7 @@
  * engine's own and may change shape.
  */
 export { ENGINE_VERSION, HORIZONS, SOURCES, assessInputSchema, runAssessment, profileHash } from './assess';
-export type { AssessInput, AssessParsed, AssessOptions, AssessOutput, AssessStats, ScenarioWorkerPool } from './assess';
+export type { AssessInput, AssessParsed, AssessOptions, AssessOutput, AssessProgress, AssessStats, ScenarioWorkerPool } from './assess';
 export { HistoryCache } from './assess-cache';
 export {
   siteSchema,
