@@ -12,9 +12,9 @@ import { AppClient, BASE_URL, ensureAppRunning, forgedToken, MAIL_STORE_DIR, tes
 
 const { pool, db } = testDb();
 const prefix = `links-${Date.now().toString(36)}`;
-const SIGN_IN = 'app/(auth)/sign-in/actions.ts';
-const INVITE = 'app/invite/[token]/actions.ts#acceptInvitation';
-const MEMBERS = 'app/(workspace)/admin/members/actions.ts';
+const SIGN_IN = 'lib/actions/sign-in.ts';
+const INVITE = 'lib/actions/invitations.ts#acceptInvitation';
+const MEMBERS = 'lib/actions/members.ts';
 const created: string[] = [];
 let nivalenId = '';
 

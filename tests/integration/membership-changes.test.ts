@@ -13,7 +13,7 @@ import { AppClient, ensureAppRunning, testDb, visibleText } from './helpers/app-
 const { pool, db } = testDb();
 const prefix = `members-${Date.now().toString(36)}`;
 const PASSWORD = 'a-test-password-for-members';
-const MEMBERS = 'action app/(workspace)/admin/members/actions.ts';
+const MEMBERS = 'action lib/actions/members.ts';
 const created: string[] = [];
 let nivalenId = '';
 let cairnholmId = '';
@@ -60,7 +60,7 @@ describe('membership changes take effect on the next request', () => {
     expect((await person.get('/workspace')).status).toBe(403);
     expect((await person.get('/communities')).status).toBe(403);
     // Signed in but in no organisation any more: 403 (lib/data/session.ts), for actions as for pages.
-    expect((await person.action('app/(workspace)/actions.ts#switchOrganisationAction', [{ organisationId: nivalenId }])).status).toBe(403);
+    expect((await person.action('lib/actions/preferences.ts#switchOrganisationAction', [{ organisationId: nivalenId }])).status).toBe(403);
   });
 
   it('a demoted admin loses the admin pages and actions at once, and keeps the workspace', async () => {
@@ -87,7 +87,7 @@ describe('membership changes take effect on the next request', () => {
     await person.signInWithPassword(m.email, PASSWORD);
     const kept = person.clone('kept copy');
     expect((await kept.get('/workspace')).status).toBe(200);
-    const out = await person.action('app/(auth)/sign-out/actions.ts#signOutAction', []);
+    const out = await person.action('lib/actions/sign-out.ts#signOutAction', []);
     expect(out.redirect).toMatch(/^\/sign-in/);
     const again = await kept.get('/workspace');
     expect(again.status).toBe(307);
@@ -122,12 +122,12 @@ describe('membership changes take effect on the next request', () => {
     const cairnholmSlug = await slugOf(cairnholmId);
 
     // First membership by organisation name: Cairnholm Hamlet Council (council), before Nivalen.
-    const switched = await rowan.action('app/(workspace)/actions.ts#switchOrganisationAction', [{ organisationId: nivalenId }]);
+    const switched = await rowan.action('lib/actions/preferences.ts#switchOrganisationAction', [{ organisationId: nivalenId }]);
     expect(switched.body).toContain('"ok":true');
     expect((await rowan.get(`/communities/${nivalenSlug}`)).status).toBe(200);
     expect((await rowan.get(`/communities/${cairnholmSlug}`)).status).toBe(404);
 
-    await rowan.action('app/(workspace)/actions.ts#switchOrganisationAction', [{ organisationId: cairnholmId }]);
+    await rowan.action('lib/actions/preferences.ts#switchOrganisationAction', [{ organisationId: cairnholmId }]);
     expect((await rowan.get(`/communities/${cairnholmSlug}`)).status).toBe(200);
     expect((await rowan.get(`/communities/${nivalenSlug}`)).status).toBe(404);
     // The communities shown are Cairnholm's now (the switcher lists both organisations, so its names prove nothing).

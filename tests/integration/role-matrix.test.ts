@@ -238,23 +238,23 @@ const routeRequests: Record<string, () => { path: string; init?: RequestInit }> 
 };
 
 const actionArgs: Record<string, (v: Variant) => unknown[]> = {
-  'action app/(auth)/sign-in/actions.ts#signInWithPassword': () => [{ email: uniqueAddress(`${fx.prefix}-nobody`), password: 'not-the-password' }],
-  'action app/(auth)/sign-in/actions.ts#requestEmailLink': () => [{ email: uniqueAddress(`${fx.prefix}-nobody`) }],
-  'action app/(auth)/sign-out/actions.ts#signOutAction': () => [],
-  'action app/invite/[token]/actions.ts#acceptInvitation': () => [{ token: forgedToken() }],
-  'action app/(workspace)/actions.ts#switchOrganisationAction': (v) => [{ organisationId: v === 'own' ? fx.own.organisationId : fx.other.organisationId }],
-  'action app/(workspace)/actions.ts#setLocaleAction': () => [{ locale: 'en' }],
-  'action app/(workspace)/communities/[slug]/profiles/[profile]/outlook/actions.ts#runOutlookAction': (v) => [
+  'action lib/actions/sign-in.ts#signInWithPassword': () => [{ email: uniqueAddress(`${fx.prefix}-nobody`), password: 'not-the-password' }],
+  'action lib/actions/sign-in.ts#requestEmailLink': () => [{ email: uniqueAddress(`${fx.prefix}-nobody`) }],
+  'action lib/actions/sign-out.ts#signOutAction': () => [],
+  'action lib/actions/invitations.ts#acceptInvitation': () => [{ token: forgedToken() }],
+  'action lib/actions/preferences.ts#switchOrganisationAction': (v) => [{ organisationId: v === 'own' ? fx.own.organisationId : fx.other.organisationId }],
+  'action lib/actions/preferences.ts#setLocaleAction': () => [{ locale: 'en' }],
+  'action lib/actions/outlooks.ts#runOutlookAction': (v) => [
     { communitySlug: (v === 'own' ? fx.own : fx.other).communitySlug, profileSlug: (v === 'own' ? fx.own : fx.other).profileSlug },
   ],
-  'action app/(workspace)/admin/members/actions.ts#inviteMember': () => [{ email: uniqueAddress(`${fx.prefix}-invitee`), role: 'council' }],
-  'action app/(workspace)/admin/members/actions.ts#changeRole': (v) => [{ membershipId: v === 'own' ? fx.own.councilMembershipId : fx.other.membershipId, role: 'council' }],
-  'action app/(workspace)/admin/members/actions.ts#removeMemberAction': (v) => [{ membershipId: v === 'own' ? fx.own.tempMembershipId : fx.other.membershipId }],
-  'action app/(workspace)/admin/members/actions.ts#revokeInvitationAction': (v) => [{ invitationId: v === 'own' ? fx.own.invitationId : fx.other.invitationId }],
+  'action lib/actions/members.ts#inviteMember': () => [{ email: uniqueAddress(`${fx.prefix}-invitee`), role: 'council' }],
+  'action lib/actions/members.ts#changeRole': (v) => [{ membershipId: v === 'own' ? fx.own.councilMembershipId : fx.other.membershipId, role: 'council' }],
+  'action lib/actions/members.ts#removeMemberAction': (v) => [{ membershipId: v === 'own' ? fx.own.tempMembershipId : fx.other.membershipId }],
+  'action lib/actions/members.ts#revokeInvitationAction': (v) => [{ invitationId: v === 'own' ? fx.own.invitationId : fx.other.invitationId }],
 };
 
 /** Rows whose action ends the session it runs in: they get a session of their own. */
-const ENDS_SESSION = new Set(['action app/(auth)/sign-out/actions.ts#signOutAction']);
+const ENDS_SESSION = new Set(['action lib/actions/sign-out.ts#signOutAction']);
 
 async function exercise(row: Row, col: Column, v: Variant): Promise<Reply> {
   // Each call works on a copy of the person's cookies, so a language or organisation change does not
