@@ -1,0 +1,54 @@
+import type { OutlookViewModel } from '@/lib/outlook/view-model';
+import { AirTemperatureChart } from './air-temperature-chart';
+import { GroundTemperatureChart } from './ground-temperature-chart';
+import { getMsgText } from './msg-text';
+import { ThawDepthChart } from './thaw-depth-chart';
+
+/** The charts: summer thaw by year, ground temperature envelopes, air temperature by window. */
+export async function ChartsSection({ vm }: { vm: OutlookViewModel }) {
+  const text = await getMsgText();
+  const k = (key: string, values?: Record<string, string | number>) => text({ key: `outlook.charts.${key}`, values });
+  const baseline = text(vm.baseline.label);
+  const names = Object.fromEntries(vm.scenarios.map((s) => [s.id, text(s.name)]));
+  // Inside the thaw chart the shaded window already spans its years on the axis: the decade names it.
+  const decades = Object.fromEntries(vm.horizons.map((h) => [h.horizon, text({ key: 'outlook.horizon', values: { horizon: h.horizon } })])) as Record<number, string>;
+  const windows = Object.fromEntries(vm.horizons.map((h) => [h.horizon, text(h.label)])) as Record<number, string>;
+  return (
+    <section aria-labelledby="charts" className="space-y-8">
+      <h2 id="charts" className="sr-only">{k('thawTitle')}</h2>
+      <figure className="rounded border border-snow-200 bg-ice-raised p-4">
+        <figcaption>
+          <h3 className="font-bold">{k('thawTitle')}</h3>
+          <p className="text-sm text-ink-soft">{k('thawDesc', { baseline })}</p>
+        </figcaption>
+        <div className="mt-3">
+          <ThawDepthChart data={vm.charts.thaw} names={names} labels={{ legend: k('legend'), depthAxis: k('depthAxis'), yearAxis: k('yearAxis'), horizons: decades, baseline, surface: k('surface') }} />
+        </div>
+      </figure>
+      <div className="grid gap-6 lg:grid-cols-2">
+        <figure className="rounded border border-snow-200 bg-ice-raised p-4">
+          <figcaption>
+            <h3 className="font-bold">{k('groundTitle')}</h3>
+            <p className="text-sm text-ink-soft">{k('groundDesc')}</p>
+          </figcaption>
+          <div className="mt-3">
+            <GroundTemperatureChart
+              data={vm.charts.ground}
+              names={names}
+              labels={{ legend: k('legend'), depthAxis: k('depthAxis'), tempAxis: k('tempAxis'), zero: k('zero'), coldest: k('coldest'), warmest: k('warmest'), horizonPicker: k('horizonPicker'), horizons: windows, baseline }}
+            />
+          </div>
+        </figure>
+        <figure className="rounded border border-snow-200 bg-ice-raised p-4">
+          <figcaption>
+            <h3 className="font-bold">{k('airTitle')}</h3>
+            <p className="text-sm text-ink-soft">{k('airDesc', { baseline })}</p>
+          </figcaption>
+          <div className="mt-3">
+            <AirTemperatureChart data={vm.charts.air} names={names} labels={{ legend: k('legend'), airAxis: k('airAxis'), categories: { baseline, ...Object.fromEntries(vm.horizons.map((h) => [String(h.horizon), decades[h.horizon]!])) }, baseline }} />
+          </div>
+        </figure>
+      </div>
+    </section>
+  );
+}
