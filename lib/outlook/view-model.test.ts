@@ -5,7 +5,12 @@ import fr from '@/messages/fr.json';
 import ru from '@/messages/ru.json';
 import nb from '@/messages/nb.json';
 import type { OutlookResult, WindowResult } from './result';
-import { buildOutlookViewModel, reasonMsg, renderMsg, type Msg } from './view-model';
+import { SETTLEMENT_HIGH_M, SETTLEMENT_MODERATE_M, VERY_WARM_PERMAFROST_C, WARM_PERMAFROST_C } from '@/lib/engine';
+import { buildOutlookViewModel as build, reasonMsg as reason, renderMsg, type Msg, type ViewModelOptions } from './view-model';
+
+const thresholds = { warmC: WARM_PERMAFROST_C, veryWarmC: VERY_WARM_PERMAFROST_C, settlementModerateM: SETTLEMENT_MODERATE_M, settlementHighM: SETTLEMENT_HIGH_M };
+const buildOutlookViewModel = (r: OutlookResult, o: Omit<ViewModelOptions, 'thresholds'>) => build(r, { ...o, thresholds });
+const reasonMsg = (code: string, locale: string, has?: (k: string) => boolean) => reason(code, locale, thresholds, has);
 
 // Numbers in the fixtures are invented.
 const MESSAGES = { en, fr, ru, nb } as const;

@@ -8,7 +8,6 @@
  * strings that are not keys are numbers formatted for the locale and years. Every horizon carries its
  * window's years, so a 2080s window (2071–2090) is never read as another period.
  */
-import { SETTLEMENT_HIGH_M, SETTLEMENT_MODERATE_M, VERY_WARM_PERMAFROST_C, WARM_PERMAFROST_C } from '@/lib/engine';
 import { airSeries, envelopeSeries, thawSeries, type AirSeries, type EnvelopeSeries, type ThawSeries } from './chart-data';
 import type { BaselineResult, ConfidenceLevel, HazardLevel, OutlookResult, WindowResult } from './result';
 import { formatDepth, formatIndex, formatNumber, formatTemperature, settlementReading } from './rounding';
@@ -83,9 +82,25 @@ export interface OutlookViewModel {
   provenance: { engineVersion: string; inputSha256: string; sources: string[] };
 }
 
+/**
+ * The engine's rating thresholds the reasons quote (server code passes the engine's constants; the
+ * view-model does not import the engine, whose public interface is not client-safe).
+ */
+export interface RatingThresholds {
+  /** Warm permafrost above this mean ground temperature [°C]. */
+  warmC: number;
+  /** Very warm permafrost above this [°C]. */
+  veryWarmC: number;
+  /** Settlement from which the rating is moderate [m]. */
+  settlementModerateM: number;
+  /** Settlement from which the rating is higher [m]. */
+  settlementHighM: number;
+}
+
 export interface ViewModelOptions {
   /** BCP 47 tag of the reader (en, fr, ru, nb). */
   locale: string;
+  thresholds: RatingThresholds;
   /** Checklist item codes that have a message under `profile.check` (others are shown as their code). */
   hasMessage?: (key: string) => boolean;
 }
@@ -98,9 +113,10 @@ function rating(level: HazardLevel): RatingCell {
  * One hazard reason code as a message, its thresholds formatted for the locale.
  * @param code Reason code from the engine (`warm_permafrost`, `checklist_ponding`, …).
  * @param locale Reader's locale.
+ * @param thresholds The engine's rating thresholds.
  * @param has Whether a message key exists; unknown codes come back as `outlook.reasons.unknown`.
  */
-export function reasonMsg(code: string, locale: string, has: (key: string) => boolean = () => true): Msg {
+export function reasonMsg(code: string, locale: string, thresholds: RatingThresholds, has: (key: string) => boolean = () => true): Msg {
   if (code.startsWith('checklist_')) {
     const item = code.slice('checklist_'.length);
     const key = `profile.check.${item}`;
@@ -109,10 +125,10 @@ export function reasonMsg(code: string, locale: string, has: (key: string) => bo
   const key = `outlook.reasons.${code}`;
   if (!has(key)) return m('outlook.reasons.unknown', { code });
   return m(key, {
-    warm: formatNumber(WARM_PERMAFROST_C, 0, locale),
-    veryWarm: formatNumber(VERY_WARM_PERMAFROST_C, 0, locale),
-    moderate: formatNumber(Math.round(SETTLEMENT_MODERATE_M * 100), 0, locale),
-    high: formatNumber(Math.round(SETTLEMENT_HIGH_M * 100), 0, locale),
+    warm: formatNumber(thresholds.warmC, 0, locale),
+    veryWarm: formatNumber(thresholds.veryWarmC, 0, locale),
+    moderate: formatNumber(Math.round(thresholds.settlementModerateM * 100), 0, locale),
+    high: formatNumber(Math.round(thresholds.settlementHighM * 100), 0, locale),
   });
 }
 
@@ -184,14 +200,14 @@ export function buildOutlookViewModel(result: OutlookResult, options: ViewModelO
       : null,
     ratings: { baseline: rating(base.hazard), rows: scenarioIds.map((s) => ({ scenario: s, cells: horizons.map((h) => { const r = row(s, h.horizon); return r ? rating(r.hazard) : null; }) })) },
     reasons: [
-      { scenario: 'baseline', title: reference, open: false, items: [{ label: baselineLabel, rating: rating(base.hazard), reasons: base.hazard_reasons.map((c) => reasonMsg(c, locale, has)) }] },
+      { scenario: 'baseline', title: reference, open: false, items: [{ label: baselineLabel, rating: rating(base.hazard), reasons: base.hazard_reasons.map((c) => reasonMsg(c, locale, options.thresholds, has)) }] },
       ...scenarioIds.map((s) => ({
         scenario: s,
         title: m(`outlook.scenarioTitle.${SCENARIO_STYLES[s].key}`),
         open: s === summary?.scenario,
         items: horizons.flatMap((h) => {
           const r = row(s, h.horizon);
-          return r ? [{ label: h.label, rating: rating(r.hazard), reasons: r.hazard_reasons.map((c) => reasonMsg(c, locale, has)) }] : [];
+          return r ? [{ label: h.label, rating: rating(r.hazard), reasons: r.hazard_reasons.map((c) => reasonMsg(c, locale, options.thresholds, has)) }] : [];
         }),
       })),
     ],

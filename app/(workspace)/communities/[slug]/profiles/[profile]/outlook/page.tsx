@@ -4,6 +4,7 @@ import { getLocale, getTranslations } from 'next-intl/server';
 import { getGroundProfile } from '@/lib/data/communities';
 import { getOutlook, type OutlookView } from '@/lib/data/outlooks';
 import { hasRole, requireActor, ROLES } from '@/lib/data/session';
+import { SETTLEMENT_HIGH_M, SETTLEMENT_MODERATE_M, VERY_WARM_PERMAFROST_C, WARM_PERMAFROST_C } from '@/lib/engine';
 import type { OutlookResult } from '@/lib/outlook/result';
 import { buildOutlookViewModel } from '@/lib/outlook/view-model';
 import { Caution } from '@/components/community/caution';
@@ -107,7 +108,8 @@ function StaleNotice({ outlook, t, canRun, run }: { outlook: OutlookView; t: T; 
 
 async function OutlookResultView({ outlook, result, locale }: { outlook: OutlookView; result: OutlookResult; locale: string }) {
   const t = await getTranslations();
-  const vm = buildOutlookViewModel(result, { locale, hasMessage: (key) => t.has(key as never) });
+  const thresholds = { warmC: WARM_PERMAFROST_C, veryWarmC: VERY_WARM_PERMAFROST_C, settlementModerateM: SETTLEMENT_MODERATE_M, settlementHighM: SETTLEMENT_HIGH_M };
+  const vm = buildOutlookViewModel(result, { locale, thresholds, hasMessage: (key) => t.has(key as never) });
   return (
     <>
       <SummarySection vm={vm} />
