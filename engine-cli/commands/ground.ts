@@ -24,13 +24,40 @@ import { EngineInputError } from '../../lib/engine/validation';
 
 const positive = z.number().positive();
 
+/**
+ * Bounds of the `ground` command's inputs: what is physical for earth materials, and what the solver
+ * finishes within its time budget (docs/site-schema.md, "Bounds"). A value outside is refused with
+ * the field's name, never passed on to the solver.
+ * - Conductivity 0.02 … 10 W m-1 K-1: still air is about 0.025, quartz about 7.7, the most
+ *   conductive common rock minerals below 10 (Farouki 1981, CRREL Monograph 81-1, tables of
+ *   constituent conductivities; from memory).
+ * - Volumetric heat capacity 1e4 … 1e7 J m-3 K-1: water is 4.18e6, the largest of any earth material
+ *   (common practice); 1e4 leaves room for very dry, loose materials.
+ * - Volumetric latent heat 0 … 3.4e8 J m-3: all pore space filled with water gives at most
+ *   ρw·Lf = 1000 × 333.7e3 = 3.34e8 J m-3 (common practice).
+ * - Layer thickness and column depth at most 1000 m, and at most {@link MAX_CELL_STEPS} cell-steps
+ *   a run (the grid has about one cell a metre below 12 m, and one step a day).
+ */
+export const GROUND_BOUNDS = {
+  conductivityWmK: { min: 0.02, max: 10 },
+  heatCapacityJm3K: { min: 1e4, max: 1e7 },
+  latentHeatJm3: { min: 0, max: 3.4e8 },
+  columnDepthM: { max: 1000 },
+} as const;
+/** Most cell × step products a `ground` run may take (about 10 s on one core of this machine: 1039 cells × 3650 steps took 0.92 s, measured). */
+export const MAX_CELL_STEPS = 40_000_000;
+
+const B = GROUND_BOUNDS;
+const conductivity = z.number().min(B.conductivityWmK.min).max(B.conductivityWmK.max);
+const heatCapacity = z.number().min(B.heatCapacityJm3K.min).max(B.heatCapacityJm3K.max);
+
 const layerSchema = z.object({
-  thickness_m: positive,
-  conductivity_thawed_w_mk: positive,
-  conductivity_frozen_w_mk: positive,
-  heat_capacity_thawed_j_m3k: positive,
-  heat_capacity_frozen_j_m3k: positive,
-  latent_heat_j_m3: z.number().min(0),
+  thickness_m: positive.max(B.columnDepthM.max),
+  conductivity_thawed_w_mk: conductivity,
+  conductivity_frozen_w_mk: conductivity,
+  heat_capacity_thawed_j_m3k: heatCapacity,
+  heat_capacity_frozen_j_m3k: heatCapacity,
+  latent_heat_j_m3: z.number().min(B.latentHeatJm3.min).max(B.latentHeatJm3.max),
   freezing_point_c: z.number().min(-30).max(10).default(0),
 });
 
@@ -68,7 +95,16 @@ const MAX_DURATION_DAYS = 365_000;
 const MAX_REPORTS = 100_000;
 
 export const groundInputSchema = z.object({
-  layers: z.array(layerSchema).min(1).max(200),
+  layers: z
+    .array(layerSchema)
+    .min(1)
+    .max(200)
+    .superRefine((layers, ctx) => {
+      const total = layers.reduce((sum, l) => sum + l.thickness_m, 0);
+      if (total > B.columnDepthM.max) {
+        ctx.addIssue({ code: 'custom', message: `the layers add up to ${total} m; the column may be at most ${B.columnDepthM.max} m deep` });
+      }
+    }),
   initial_temperature_c: initialSchema,
   surface: surfaceSchema,
   bottom_heat_flux_w_m2: z.number().min(-10).max(10).default(0),
@@ -152,6 +188,14 @@ export function runGround(input: GroundInput): GroundOutput {
   if (reportCount > MAX_REPORTS) throw new EngineInputError('output.every_days', `gives more than ${MAX_REPORTS} reports; choose a longer interval`);
 
   const grid = buildColumnGrid(input.layers.map((l) => l.thickness_m));
+  const dtDays = Math.min(1, duration / 2000);
+  const steps = Math.ceil(duration / dtDays);
+  if (grid.cellCount * steps > MAX_CELL_STEPS) {
+    throw new EngineInputError(
+      'duration_days',
+      `with ${grid.cellCount} cells this run needs ${grid.cellCount * steps} cell-steps, more than the ${MAX_CELL_STEPS} the solver is allowed; shorten the run or the column`,
+    );
+  }
   const materials = input.layers.map((l) =>
     isothermalMaterial({
       conductivityThawedWmK: l.conductivity_thawed_w_mk,
@@ -167,7 +211,6 @@ export function runGround(input: GroundInput): GroundOutput {
   const depths = input.output.depths_m;
   column.setReportingDepths(depths);
   const surfaceAt = surfaceFunction(input.surface);
-  const dtDays = Math.min(1, duration / 2000);
   const daily = input.surface.kind === 'daily';
 
   const out: GroundOutput = { times_days: [], thaw_depth_m: [], temperature_c: [], annual: [], time_step_days: dtDays, cell_count: grid.cellCount };

@@ -2,9 +2,10 @@
  * 1-D transient heat conduction with phase change in a layered ground column.
  *
  * API summary
- * - Materials: `isothermalMaterial({...})` (phase change at one temperature, as the `ground` command
- *   uses) or `tabulatedMaterial({...})` (any monotone enthalpy–temperature curve, e.g. with unfrozen
- *   water; soil-properties.ts builds one with `freezingCurveMaterial`). One material per layer.
+ * - Materials (heat-conduction-materials.ts, re-exported here): `isothermalMaterial({...})` (phase
+ *   change at one temperature, as the `ground` command uses) or `tabulatedMaterial({...})` (any
+ *   monotone enthalpy–temperature curve, e.g. with unfrozen water; soil-properties.ts builds one with
+ *   `freezingCurveMaterial`). One material per layer.
  * - `new HeatConductionColumn(grid, materials, { bottomHeatFluxWm2 })`, grid from grid.ts.
  * - `step(dtSeconds, surfaceTemperatureC, snow?)`: one implicit step; `snow` = `{ thicknessM,
  *   conductivityWmK, heatCapacityJm3K }` or null/undefined for bare ground.
@@ -12,7 +13,8 @@
  *   temperatures and the predictor's memory, so a restored state continues bit for bit), `getEnthalpy()`, `getTemperatures()`, `setTemperatureProfile(fn)`,
  *   `setTemperatures(arr)`.
  * - Diagnostics: `thawDepthM()`, `groundSurfaceTemperatureC()`, `temperatureAtDepthC(z)`,
- *   `permafrostTableM(maxEnthalpy)`, `detectTalik(minEnthalpy, maxEnthalpy)`.
+ *   `permafrostTableM(maxEnthalpy)` (null: no cell stayed frozen), `detectTalik(minEnthalpy,
+ *   maxEnthalpy, minThicknessM = 0.2)` → `TalikInfo | null`.
  * - Statistics over every step since `resetStatistics()`: `setReportingDepths(depths)`, then
  *   `statistics()` → time-mean, min and max temperature per reporting depth, the largest thaw depth,
  *   per-cell min/max enthalpy (for the permafrost table and taliks), heat that crossed the soil surface
@@ -38,7 +40,7 @@
  *   in `statistics().nonConvergedSteps`.
  * - Thaw front: inside a partly thawed cell from its thawed fraction (thawed part on top),
  *   elsewhere by linear interpolation of T − T_f between cell centres.
- * - Speed (measured with heat-conduction-bench.ts, 124 cells, daily steps, isothermal materials):
+ * - Speed (measured with bench/heat-conduction-bench.ts, 124 cells, daily steps, isothermal materials):
  *   about 1.3 iterations a step and 12–23 million node-steps per second on this shared machine;
  *   with unfrozen-water curves about 2.1 iterations a step.
  * - Snow: up to `SNOW_CELLS` equal cells of the given thickness on top of the soil, sensible heat only,
@@ -47,6 +49,9 @@
  *   ground temperature. The snow's own heat budget is not part of the soil energy accounting, which
  *   counts heat through the snow–soil interface.
  * - No allocation inside `step`.
+ * - One class: the step, the diagnostics and the statistics share the column's private per-cell
+ *   arrays of the hot loop, so they stay methods of `HeatConductionColumn` in this file; the
+ *   materials are in heat-conduction-materials.ts.
  *
  * References
  * [1] H. S. Carslaw, J. C. Jaeger, Conduction of Heat in Solids, 2nd ed., Oxford, 1959.
@@ -56,95 +61,9 @@
  *     conductivity, tridiagonal matrix algorithm).
  */
 import type { ColumnGrid } from './grid';
+import type { PhaseChangeMaterial } from './heat-conduction-materials';
 
-/** A material's enthalpy–temperature–conductivity curve (see `tabulatedMaterial`). */
-export interface PhaseChangeMaterial {
-  /** Enthalpy at the breakpoints [J m-3], non-decreasing. */
-  readonly enthalpyJm3: Float64Array;
-  /** Temperature at the breakpoints [°C], non-decreasing. */
-  readonly temperatureC: Float64Array;
-  /** Conductivity at the breakpoints [W m-1 K-1] (linear in H between them). */
-  readonly conductivityWmK: Float64Array;
-  /** Volumetric heat capacity below the first breakpoint (frozen) [J m-3 K-1]. */
-  readonly heatCapacityBelowJm3K: number;
-  /** Volumetric heat capacity above the last breakpoint (thawed) [J m-3 K-1]. */
-  readonly heatCapacityAboveJm3K: number;
-  /** Ground is thawed where T > this [°C]; a cell exactly at it counts as frozen. */
-  readonly freezingPointC: number;
-  /** Enthalpy range of the isothermal phase change (flat segment) [J m-3], if there is one. */
-  readonly latentRangeJm3: readonly [number, number] | null;
-}
-
-/** Properties of a material with phase change at a single temperature. */
-export interface IsothermalMaterialParams {
-  conductivityThawedWmK: number;
-  conductivityFrozenWmK: number;
-  heatCapacityThawedJm3K: number;
-  heatCapacityFrozenJm3K: number;
-  /** Volumetric latent heat [J m-3], ≥ 0 (0: no phase change). */
-  latentHeatJm3: number;
-  /** [°C], default 0. */
-  freezingPointC?: number;
-}
-
-/**
- * Material with phase change at one temperature: H = C_f (T − T_f) frozen, H ∈ [0, L] at T_f,
- * H = L + C_t (T − T_f) thawed; conductivity linear in the thawed fraction inside the phase change.
- * @param p Thawed/frozen conductivity [W m-1 K-1] and volumetric heat capacity [J m-3 K-1],
- *   volumetric latent heat [J m-3], freezing point [°C].
- * @returns The material curve; enthalpy reference H = 0 for frozen ground at T_f.
- * References: [2] of this module (enthalpy method).
- */
-export function isothermalMaterial(p: IsothermalMaterialParams): PhaseChangeMaterial {
-  const tf = p.freezingPointC ?? 0;
-  const l = p.latentHeatJm3;
-  if (!(p.conductivityThawedWmK > 0 && p.conductivityFrozenWmK > 0 && p.heatCapacityThawedJm3K > 0 && p.heatCapacityFrozenJm3K > 0 && l >= 0)) {
-    throw new RangeError('isothermalMaterial: conductivities and heat capacities must be > 0 and latent heat >= 0');
-  }
-  return {
-    enthalpyJm3: Float64Array.of(0, l),
-    temperatureC: Float64Array.of(tf, tf),
-    conductivityWmK: Float64Array.of(p.conductivityFrozenWmK, p.conductivityThawedWmK),
-    heatCapacityBelowJm3K: p.heatCapacityFrozenJm3K,
-    heatCapacityAboveJm3K: p.heatCapacityThawedJm3K,
-    freezingPointC: tf,
-    latentRangeJm3: l > 0 ? [0, l] : null,
-  };
-}
-
-/**
- * Material from a tabulated curve (e.g. with unfrozen water): breakpoints of T, H and k.
- * @param p Breakpoint temperatures [°C] and enthalpies [J m-3] (both non-decreasing, H strictly
- *   increasing where T increases), conductivities [W m-1 K-1], heat capacities beyond the ends
- *   [J m-3 K-1], freezing point [°C] (thawed above it).
- * @returns The material curve.
- */
-export function tabulatedMaterial(p: {
-  temperatureC: readonly number[];
-  enthalpyJm3: readonly number[];
-  conductivityWmK: readonly number[];
-  heatCapacityBelowJm3K: number;
-  heatCapacityAboveJm3K: number;
-  freezingPointC: number;
-}): PhaseChangeMaterial {
-  const m = p.temperatureC.length;
-  if (m < 1 || p.enthalpyJm3.length !== m || p.conductivityWmK.length !== m) throw new RangeError('tabulatedMaterial: arrays must have the same length >= 1');
-  for (let i = 1; i < m; i++) {
-    if (!(p.temperatureC[i] >= p.temperatureC[i - 1]) || !(p.enthalpyJm3[i] >= p.enthalpyJm3[i - 1])) {
-      throw new RangeError('tabulatedMaterial: temperature and enthalpy must be non-decreasing');
-    }
-  }
-  if (!(p.heatCapacityBelowJm3K > 0 && p.heatCapacityAboveJm3K > 0)) throw new RangeError('tabulatedMaterial: heat capacities must be > 0');
-  return {
-    enthalpyJm3: Float64Array.from(p.enthalpyJm3),
-    temperatureC: Float64Array.from(p.temperatureC),
-    conductivityWmK: Float64Array.from(p.conductivityWmK),
-    heatCapacityBelowJm3K: p.heatCapacityBelowJm3K,
-    heatCapacityAboveJm3K: p.heatCapacityAboveJm3K,
-    freezingPointC: p.freezingPointC,
-    latentRangeJm3: null,
-  };
-}
+export { isothermalMaterial, tabulatedMaterial, type IsothermalMaterialParams, type PhaseChangeMaterial } from './heat-conduction-materials';
 
 /** A snow cover for one step. */
 export interface SnowCover {

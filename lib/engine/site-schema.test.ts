@@ -58,6 +58,12 @@ describe('siteSchema: every field error is named', () => {
     ['salinity negative', (s) => (s.pore_water_salinity_ppt = -1), 'pore_water_salinity_ppt: must be >= 0'],
     ['no layers', (s) => (s.layers = []), 'layers: must have at least 1 entry'],
     ['thickness 0', (s) => (s.layers[1].thickness_m = 0), 'layers[1].thickness_m: must be > 0'],
+    ['a 1e9 m layer', (s) => (s.layers[4].thickness_m = 1e9), 'layers[4].thickness_m: must be <= 200'],
+    [
+      '50 layers of 200 m (a 10 km column)',
+      (s) => (s.layers = Array.from({ length: 50 }, () => ({ ...s.layers[4], thickness_m: 200 }))),
+      'layers: the layers add up to 10000 m; the column may be at most 200 m deep (deeper ground hardly changes an outlook to 2100)',
+    ],
     ['texture unknown', (s) => (s.layers[0].texture = 'loam'), 'layers[0].texture: must be one of "gravel", "sand", "silt", "clay", "peat", "till", "bedrock"'],
     ['dry density missing', (s) => delete s.layers[2].dry_density_kg_m3, 'layers[2].dry_density_kg_m3: is required'],
     ['water content above 1', (s) => (s.layers[0].volumetric_water_content = 1.2), 'layers[0].volumetric_water_content: must be <= 1'],

@@ -25,6 +25,15 @@ import { TEXTURES, type Texture } from './soil-properties';
 /** Minimum column depth the site model runs with [m]; layers are extended to it (see above). */
 export const MIN_COLUMN_DEPTH_M = 50;
 
+/**
+ * Deepest column the layers given may describe [m]: 200. Physical: the warming since 1850 reaches
+ * about √(κ·t) ≈ √(1e-6 m² s-1 × 250 a) ≈ 90 m by 2100 (Carslaw & Jaeger 1959, §2.4, with a typical
+ * ground diffusivity of 1e-6 m² s-1, common practice), so ground deeper than 200 m hardly changes an
+ * outlook. Solver budget: 200 m is about 90 cells of the site grid, within the speed goals of
+ * docs/bench.md; a 50 km column (50 layers of 1000 m) would take minutes.
+ */
+export const MAX_COLUMN_DEPTH_M = 200;
+
 /** Soil and rock textures the soil-property models know (the one list, soil-properties.ts). */
 export { TEXTURES, type Texture } from './soil-properties';
 
@@ -128,7 +137,7 @@ const surfaceSchema = z.strictObject({
 const layerSchema = z
   .strictObject({
     description: z.string().max(200).optional(),
-    thickness_m: finite().gt(0).max(1000),
+    thickness_m: finite().gt(0).max(MAX_COLUMN_DEPTH_M),
     texture: z.enum(TEXTURES),
     dry_density_kg_m3: finite().min(20).max(3000),
     volumetric_water_content: finite().min(0).max(1),
@@ -247,6 +256,13 @@ export const siteSchema = z
   })
   .superRefine((site, ctx) => {
     const total = givenColumnDepthM(site);
+    if (total > MAX_COLUMN_DEPTH_M) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['layers'],
+        message: `the layers add up to ${total} m; the column may be at most ${MAX_COLUMN_DEPTH_M} m deep (deeper ground hardly changes an outlook to 2100)`,
+      });
+    }
     const profile = site.observed?.ground_temperature_profile;
     if (profile) {
       const deepest = profile.points[profile.points.length - 1].depth_m;

@@ -123,6 +123,15 @@ describe('engine CLI: assess', () => {
     expect(r.stderr.trim()).toBe('site.layers[1].thickness_m: must be > 0');
   });
 
+  it('a 50 km column (50 layers of 1000 m): exit 2 naming the layer thickness, at once (bounds, docs/site-schema.md)', () => {
+    const s = site() as { layers: { thickness_m: number }[] };
+    s.layers = Array.from({ length: 50 }, () => ({ ...s.layers[s.layers.length - 1], thickness_m: 1000 }));
+    const r = runCli(JSON.stringify({ site: s, scenarios: ['SSP2-4.5'], horizons: [2050] }));
+    expect(r.status).toBe(2);
+    expect(r.stdout).toBe('');
+    expect(r.stderr.trim()).toBe('site.layers[0].thickness_m: must be <= 200');
+  });
+
   it('an unknown scenario: exit 2 naming scenarios[1]', () => {
     const r = runCli(JSON.stringify({ site: site(), scenarios: ['SSP2-4.5', 'RCP8.5'], horizons: [2050] }));
     expect(r.status).toBe(2);

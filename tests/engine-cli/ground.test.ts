@@ -216,6 +216,8 @@ describe('engine CLI: ground', () => {
       ['reporting depth below the column', { ...contractExample, output: { every_days: 10, depths_m: [0.5, 31] } }, 'output.depths_m[1]: must be <= the column depth'],
       ['missing duration', { ...contractExample, duration_days: undefined }, 'duration_days: is required'],
       ['not JSON', '{"layers": [', '(input): not valid JSON'],
+      ['a 1e9 m layer (bounds, docs/site-schema.md)', { ...contractExample, layers: [{ ...contractLayer, thickness_m: 1e9 }] }, 'layers[0].thickness_m: must be <= 1000'],
+      ['a conductivity of 1e300', { ...contractExample, layers: [{ ...contractLayer, conductivity_thawed_w_mk: 1e300 }] }, 'layers[0].conductivity_thawed_w_mk: must be <= 10'],
     ];
     for (const [name, input, reason] of cases) {
       it(name, () => {
