@@ -10,3 +10,7 @@ export * from './communities';
 export * from './ground-profiles';
 export * from './ground-profile-versions';
 export * from './outlooks';
+export * from './briefings';
+export * from './briefing-versions';
+export * from './briefing-languages';
+export * from './briefing-strings';

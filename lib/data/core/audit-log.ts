@@ -22,7 +22,14 @@ export const auditEventCodes = [
   'member.role_changed',
   'member.removed',
   'organisation.switched',
+  'briefing.created',
+  'briefing.submitted',
   'briefing.published',
+  'briefing.superseded',
+  'briefing.version_created',
+  'briefing.language_added',
+  'briefing.string_corrected',
+  'briefing.language_approved',
 ] as const;
 export type AuditEventCode = (typeof auditEventCodes)[number];
 
