@@ -16,39 +16,34 @@ export async function ChartsSection({ vm }: { vm: OutlookViewModel }) {
   return (
     <section aria-labelledby="charts" className="space-y-8">
       <h2 id="charts" className="sr-only">{k('thawTitle')}</h2>
-      <figure className="rounded border border-snow-200 bg-ice-raised p-4">
-        <figcaption>
-          <h3 className="font-bold">{k('thawTitle')}</h3>
-          <p className="text-sm text-ink-soft">{k('thawDesc', { baseline })}</p>
-        </figcaption>
-        <div className="mt-3">
-          <ThawDepthChart data={vm.charts.thaw} names={names} labels={{ legend: k('legend'), depthAxis: k('depthAxis'), yearAxis: k('yearAxis'), horizons: decades, baseline, surface: k('surface') }} />
-        </div>
-      </figure>
+      <ChartFigure title={k('thawTitle')} description={k('thawDesc', { baseline })}>
+        <ThawDepthChart data={vm.charts.thaw} names={names} labels={{ legend: k('legend'), depthAxis: k('depthAxis'), yearAxis: k('yearAxis'), horizons: decades, baseline, surface: k('surface') }} />
+      </ChartFigure>
       <div className="grid gap-6 lg:grid-cols-2">
-        <figure className="rounded border border-snow-200 bg-ice-raised p-4">
-          <figcaption>
-            <h3 className="font-bold">{k('groundTitle')}</h3>
-            <p className="text-sm text-ink-soft">{k('groundDesc')}</p>
-          </figcaption>
-          <div className="mt-3">
-            <GroundTemperatureChart
-              data={vm.charts.ground}
-              names={names}
-              labels={{ legend: k('legend'), depthAxis: k('depthAxis'), tempAxis: k('tempAxis'), zero: k('zero'), coldest: k('coldest'), warmest: k('warmest'), horizonPicker: k('horizonPicker'), horizons: windows, baseline }}
-            />
-          </div>
-        </figure>
-        <figure className="rounded border border-snow-200 bg-ice-raised p-4">
-          <figcaption>
-            <h3 className="font-bold">{k('airTitle')}</h3>
-            <p className="text-sm text-ink-soft">{k('airDesc', { baseline })}</p>
-          </figcaption>
-          <div className="mt-3">
-            <AirTemperatureChart data={vm.charts.air} names={names} labels={{ legend: k('legend'), airAxis: k('airAxis'), categories: { baseline, ...Object.fromEntries(vm.horizons.map((h) => [String(h.horizon), decades[h.horizon]!])) }, baseline }} />
-          </div>
-        </figure>
+        <ChartFigure title={k('groundTitle')} description={k('groundDesc')}>
+          <GroundTemperatureChart
+            data={vm.charts.ground}
+            names={names}
+            labels={{ legend: k('legend'), depthAxis: k('depthAxis'), tempAxis: k('tempAxis'), zero: k('zero'), coldest: k('coldest'), warmest: k('warmest'), horizonPicker: k('horizonPicker'), horizons: windows, baseline }}
+          />
+        </ChartFigure>
+        <ChartFigure title={k('airTitle')} description={k('airDesc', { baseline })}>
+          <AirTemperatureChart data={vm.charts.air} names={names} labels={{ legend: k('legend'), airAxis: k('airAxis'), categories: { baseline, ...Object.fromEntries(vm.horizons.map((h) => [String(h.horizon), decades[h.horizon]!])) }, baseline }} />
+        </ChartFigure>
       </div>
     </section>
+  );
+}
+
+/** One chart in its frame, with its title and what it shows as the figure's caption. */
+function ChartFigure({ title, description, children }: { title: string; description: string; children: React.ReactNode }) {
+  return (
+    <figure className="rounded border border-snow-200 bg-ice-raised p-4">
+      <figcaption>
+        <h3 className="font-bold">{title}</h3>
+        <p className="text-sm text-ink-soft">{description}</p>
+      </figcaption>
+      <div className="mt-3">{children}</div>
+    </figure>
   );
 }

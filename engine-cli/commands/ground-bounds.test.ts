@@ -5,24 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { runEngineCommand } from '../run-command';
-
-const layer = {
-  thickness_m: 30,
-  conductivity_thawed_w_mk: 1.2,
-  conductivity_frozen_w_mk: 2.0,
-  heat_capacity_thawed_j_m3k: 2.6e6,
-  heat_capacity_frozen_j_m3k: 1.9e6,
-  latent_heat_j_m3: 1.0e8,
-  freezing_point_c: 0,
-};
-const base = {
-  layers: [layer],
-  initial_temperature_c: -2,
-  surface: { kind: 'constant', temperature_c: 5 },
-  bottom_heat_flux_w_m2: 0,
-  duration_days: 30,
-  output: { every_days: 10, depths_m: [0.25, 0.5, 1] },
-};
+import { contractExample as base, contractLayer as layer } from '../../tests/fixtures/engine/ground-contract-example';
 
 async function refusal(input: unknown): Promise<string> {
   const started = Date.now();

@@ -7,6 +7,7 @@ import { db } from '@/db/client';
 import { memberships, organisations, roles, sessions, users, type Role } from '@/db/schema';
 import { auth } from '@/lib/auth/auth';
 import { safeReturnPath } from '@/lib/schemas/auth';
+import { hasRole, ROLES } from '@/lib/schemas/roles';
 
 /**
  * THE authorization core. Every data module asks here who is acting, in which organisation and with
@@ -23,7 +24,7 @@ import { safeReturnPath } from '@/lib/schemas/auth';
  */
 
 export type { Role };
-export { roles };
+export { roles, hasRole, ROLES };
 
 export interface MembershipSummary {
   organisationId: string;
@@ -135,11 +136,6 @@ export async function requireActor(allowed?: readonly Role[]): Promise<Actor> {
   return actor;
 }
 
-/** True when the actor's role is one of `allowed` (use with ROLES, so pages and actions agree). */
-export function hasRole(actor: Pick<Actor, 'role'>, allowed: readonly Role[]): boolean {
-  return allowed.includes(actor.role);
-}
-
 /** True when the thing belongs to the actor's active organisation. */
 export function isOwn(organisationId: string | null | undefined, actor: Actor): boolean {
   return !!organisationId && organisationId === actor.organisationId;
@@ -197,10 +193,3 @@ export function routeError(e: unknown): Response {
   throw e;
 }
 
-/** Role sets used across the app, so a page and its action cannot drift apart. */
-export const ROLES = {
-  all: roles,
-  admin: ['admin'],
-  planning: ['admin', 'planner'],
-  translating: ['admin', 'planner', 'translator'],
-} as const satisfies Record<string, readonly Role[]>;

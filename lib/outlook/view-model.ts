@@ -166,7 +166,8 @@ export function buildOutlookViewModel(result: OutlookResult, options: ViewModelO
   const row = (s: string, h: number) => result.results.find((r) => r.scenario === s && r.horizon === h);
   const baselineLabel = m('outlook.baseline', { start: base.period[0], end: base.period[1] });
   const reference = m('outlook.baselineReference', { start: base.period[0], end: base.period[1] });
-  const summary = buildSummary(result, locale, (s) => `\u0000${s}`);
+  // The summary names its scenario by message key; renderMsg translates it in the sentence's language.
+  const summary = buildSummary(result, locale, (s) => `outlook.scenarioUnder.${SCENARIO_STYLES[s].key}`);
   const scenarios = scenarioIds.map((id) => ({
     id,
     name: m(`outlook.scenario.${SCENARIO_STYLES[id].key}`),
@@ -179,7 +180,7 @@ export function buildOutlookViewModel(result: OutlookResult, options: ViewModelO
     ...scenarioIds.flatMap((s) =>
       horizons.flatMap((h) => {
         const r = row(s, h.horizon);
-        return r ? [{ scenario: s, horizon: h.horizon, window: m('outlook.horizonWindow', { horizon: h.horizon, start: r.window[0], end: r.window[1] }), ...tableCells(r, locale) }] : [];
+        return r ? [{ scenario: s, horizon: h.horizon, window: horizonLabel(r).label, ...tableCells(r, locale) }] : [];
       }),
     ),
   ];
@@ -192,9 +193,7 @@ export function buildOutlookViewModel(result: OutlookResult, options: ViewModelO
     summary: summary
       ? {
           scenario: summary.scenario,
-          // The summary names its scenario through a placeholder; the view-model swaps in the key so
-          // the renderer translates the scenario's name in the same language as the sentence.
-          sentences: summary.sentences.map((s) => m(`outlook.summary.${s.key}`, Object.fromEntries(Object.entries(s.values).map(([k, v]) => [k, typeof v === 'string' && v.startsWith('\u0000') ? `outlook.scenarioUnder.${SCENARIO_STYLES[v.slice(1) as OutlookScenario].key}` : v])))),
+          sentences: summary.sentences.map((s) => m(`outlook.summary.${s.key}`, s.values)),
           note: m('outlook.scenarioNote'),
         }
       : null,

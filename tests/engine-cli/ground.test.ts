@@ -7,6 +7,7 @@ import { spawnSync } from 'node:child_process';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { neumannTwoPhaseThaw, thawDepthStefan } from '../../lib/engine/stefan';
+import { contractExample, contractLayer } from '../fixtures/engine/ground-contract-example';
 
 const root = path.resolve(__dirname, '..', '..');
 
@@ -30,23 +31,6 @@ function ok(input: unknown): Out {
   return JSON.parse(r.stdout) as Out;
 }
 
-const contractLayer = {
-  thickness_m: 30,
-  conductivity_thawed_w_mk: 1.2,
-  conductivity_frozen_w_mk: 2.0,
-  heat_capacity_thawed_j_m3k: 2.6e6,
-  heat_capacity_frozen_j_m3k: 1.9e6,
-  latent_heat_j_m3: 1.0e8,
-  freezing_point_c: 0,
-};
-const contractExample = {
-  layers: [contractLayer],
-  initial_temperature_c: -2,
-  surface: { kind: 'constant', temperature_c: 5 },
-  bottom_heat_flux_w_m2: 0,
-  duration_days: 30,
-  output: { every_days: 10, depths_m: [0.25, 0.5, 1] },
-};
 
 describe('engine CLI: ground', () => {
   it('the contract example gives close to the listed numbers', () => {

@@ -3,6 +3,7 @@ import { randomBytes } from 'node:crypto';
 import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import type { Db, Tx } from '@/db/client';
 import { briefingLanguages, briefings, briefingStrings, briefingVersions, communities, outlooks, type Role } from '@/db/schema';
+import { hasRole, ROLES } from '@/lib/schemas/roles';
 import { recordAuditEvent } from './audit-log';
 
 /**
@@ -32,14 +33,12 @@ export class BriefingError extends Error {
   }
 }
 
-const PLANNING: readonly Role[] = ['admin', 'planner'];
-const TRANSLATING: readonly Role[] = ['admin', 'planner', 'translator'];
 export const SOURCE_LANGUAGE = 'en';
 /** BCP 47 tag as the product accepts it: language, optional script and region (e.g. `iu-Cans`, `fr-CA`). */
 const LANG_TAG = /^[a-z]{2,3}(-[A-Z][a-z]{3})?(-([A-Z]{2}|\d{3}))?$/;
 
 function requireRole(actor: BriefingActor, allowed: readonly Role[]): void {
-  if (!allowed.includes(actor.role)) throw new BriefingError(403, 'briefing.forbidden');
+  if (!hasRole(actor, allowed)) throw new BriefingError(403, 'briefing.forbidden');
 }
 
 async function loadVersion(db: Db | Tx, actor: BriefingActor, versionId: string, forUpdate = false) {
@@ -68,7 +67,7 @@ export interface CreateBriefingInput {
 
 /** Planners: a new briefing with version 1 as a draft in English. */
 export async function createBriefing(db: Db, actor: BriefingActor, input: CreateBriefingInput): Promise<{ briefingId: string; versionId: string; publicId: string }> {
-  requireRole(actor, PLANNING);
+  requireRole(actor, ROLES.planning);
   if (input.outlookIds.length === 0) throw new BriefingError(422, 'briefing.outlooks.required');
   return db.transaction(async (tx) => {
     const [community] = await tx.select({ organisationId: communities.organisationId }).from(communities).where(eq(communities.id, input.communityId)).limit(1);
@@ -81,16 +80,25 @@ export async function createBriefing(db: Db, actor: BriefingActor, input: Create
     const versionId = crypto.randomUUID();
     const publicId = randomBytes(16).toString('base64url').slice(0, 22);
     await tx.insert(briefings).values({ id: briefingId, organisationId: actor.organisationId, communityId: input.communityId, publicId, createdByUserId: actor.userId });
-    await tx.insert(briefingVersions).values({ id: versionId, briefingId, version: 1, outlookIds: input.outlookIds, numbersSha256: input.numbersSha256 });
-    await tx.insert(briefingLanguages).values({ versionId, lang: SOURCE_LANGUAGE });
-    await writeStrings(tx, versionId, SOURCE_LANGUAGE, input.strings, input.numbersSha256);
+    await insertDraftVersion(tx, { id: versionId, briefingId, version: 1 }, input);
     await audit(tx, actor, 'briefing.created', briefingId, { versionId, version: 1, outlookIds: input.outlookIds });
     return { briefingId, versionId, publicId };
   });
 }
 
-async function writeStrings(tx: Tx, versionId: string, lang: string, strings: Record<string, string>, numbersSha256: string) {
-  const rows = Object.entries(strings).map(([key, generated]) => ({ versionId, lang, key, generated, numbersSha256 }));
+/** A draft version with its English language and strings (the first version and every later one). */
+async function insertDraftVersion(tx: Tx, v: { id: string; briefingId: string; version: number }, input: Omit<CreateBriefingInput, 'communityId'>) {
+  await tx.insert(briefingVersions).values({ ...v, outlookIds: input.outlookIds, numbersSha256: input.numbersSha256 });
+  await tx.insert(briefingLanguages).values({ versionId: v.id, lang: SOURCE_LANGUAGE });
+  await writeStrings(tx, v.id, SOURCE_LANGUAGE, input.strings, input.numbersSha256);
+}
+
+/** Inserts a language's strings; `kept` carries translators' corrections over by key. */
+async function writeStrings(tx: Tx, versionId: string, lang: string, strings: Record<string, string>, numbersSha256: string, kept?: Map<string, { correction: string | null; correctedByUserId: string | null }>) {
+  const rows = Object.entries(strings).map(([key, generated]) => {
+    const k = kept?.get(key);
+    return { versionId, lang, key, generated, numbersSha256, correction: k?.correction ?? null, correctedByUserId: k?.correctedByUserId ?? null };
+  });
   if (rows.length > 0) await tx.insert(briefingStrings).values(rows);
 }
 
@@ -99,25 +107,21 @@ async function writeStrings(tx: Tx, versionId: string, lang: string, strings: Re
  * when the numbers are unchanged (same SHA-256) and dropped with the numbers it was made for.
  */
 export async function regenerateStrings(db: Db, actor: BriefingActor, versionId: string, lang: string, numbersSha256: string, strings: Record<string, string>): Promise<void> {
-  requireRole(actor, PLANNING);
+  requireRole(actor, ROLES.planning);
   await db.transaction(async (tx) => {
     const v = await loadVersion(tx, actor, versionId, true);
     if (v.state !== 'draft') throw new BriefingError(409, 'briefing.not_draft');
     const old = await tx.select().from(briefingStrings).where(and(eq(briefingStrings.versionId, versionId), eq(briefingStrings.lang, lang)));
     const kept = new Map(old.filter((s) => s.correction !== null && s.numbersSha256 === numbersSha256).map((s) => [s.key, s]));
     await tx.delete(briefingStrings).where(and(eq(briefingStrings.versionId, versionId), eq(briefingStrings.lang, lang)));
-    const rows = Object.entries(strings).map(([key, generated]) => {
-      const k = kept.get(key);
-      return { versionId, lang, key, generated, numbersSha256, correction: k?.correction ?? null, correctedByUserId: k?.correctedByUserId ?? null };
-    });
-    if (rows.length > 0) await tx.insert(briefingStrings).values(rows);
+    await writeStrings(tx, versionId, lang, strings, numbersSha256, kept);
     await tx.update(briefingVersions).set({ numbersSha256 }).where(eq(briefingVersions.id, versionId));
   });
 }
 
 /** Planners: draft → in review (English and every added language go to review with it). */
 export async function submitForReview(db: Db, actor: BriefingActor, versionId: string): Promise<void> {
-  requireRole(actor, PLANNING);
+  requireRole(actor, ROLES.planning);
   await db.transaction(async (tx) => {
     const v = await loadVersion(tx, actor, versionId, true);
     if (v.state !== 'draft') throw new BriefingError(409, 'briefing.not_draft');
@@ -132,7 +136,7 @@ export async function submitForReview(db: Db, actor: BriefingActor, versionId: s
  * becomes superseded (still readable). Returns the languages approved at publication.
  */
 export async function publishVersion(db: Db, actor: BriefingActor, versionId: string): Promise<{ languages: string[] }> {
-  requireRole(actor, PLANNING);
+  requireRole(actor, ROLES.planning);
   return db.transaction(async (tx) => {
     const v = await loadVersion(tx, actor, versionId, true);
     if (v.state !== 'in_review') throw new BriefingError(409, 'briefing.not_in_review');
@@ -160,7 +164,7 @@ export async function publishVersion(db: Db, actor: BriefingActor, versionId: st
 
 /** Planners: a new draft version after the latest one, from new outlooks (the published one stays as it is). */
 export async function createNextVersion(db: Db, actor: BriefingActor, briefingId: string, input: Omit<CreateBriefingInput, 'communityId'>): Promise<{ versionId: string; version: number }> {
-  requireRole(actor, PLANNING);
+  requireRole(actor, ROLES.planning);
   return db.transaction(async (tx) => {
     const [b] = await tx.select().from(briefings).where(eq(briefings.id, briefingId)).limit(1).for('update');
     if (!b || b.organisationId !== actor.organisationId) throw new BriefingError(404, 'briefing.not_found');
@@ -168,9 +172,7 @@ export async function createNextVersion(db: Db, actor: BriefingActor, briefingId
     if (latest && (latest.state === 'draft' || latest.state === 'in_review')) throw new BriefingError(409, 'briefing.open_version_exists');
     const version = (latest?.version ?? 0) + 1;
     const versionId = crypto.randomUUID();
-    await tx.insert(briefingVersions).values({ id: versionId, briefingId, version, outlookIds: input.outlookIds, numbersSha256: input.numbersSha256 });
-    await tx.insert(briefingLanguages).values({ versionId, lang: SOURCE_LANGUAGE });
-    await writeStrings(tx, versionId, SOURCE_LANGUAGE, input.strings, input.numbersSha256);
+    await insertDraftVersion(tx, { id: versionId, briefingId, version }, input);
     await audit(tx, actor, 'briefing.version_created', briefingId, { versionId, version });
     return { versionId, version };
   });
@@ -182,7 +184,7 @@ export async function createNextVersion(db: Db, actor: BriefingActor, briefingId
  * the language stays unpublished until approved.
  */
 export async function addLanguage(db: Db, actor: BriefingActor, versionId: string, lang: string, strings: Record<string, string>, opts: { shipped: boolean }): Promise<void> {
-  requireRole(actor, TRANSLATING);
+  requireRole(actor, ROLES.translating);
   if (!LANG_TAG.test(lang) || lang === SOURCE_LANGUAGE) throw new BriefingError(422, 'briefing.lang.invalid');
   await db.transaction(async (tx) => {
     const v = await loadVersion(tx, actor, versionId, true);
@@ -206,7 +208,7 @@ async function loadLanguage(tx: Tx, versionId: string, lang: string) {
 
 /** Translators: corrects one string of a language not yet approved (approved text is fixed). */
 export async function correctString(db: Db, actor: BriefingActor, versionId: string, lang: string, key: string, text: string): Promise<void> {
-  requireRole(actor, TRANSLATING);
+  requireRole(actor, ROLES.translating);
   if (!text.trim()) throw new BriefingError(422, 'briefing.correction.empty');
   await db.transaction(async (tx) => {
     const v = await loadVersion(tx, actor, versionId, true);
@@ -227,7 +229,7 @@ export async function correctString(db: Db, actor: BriefingActor, versionId: str
  * Returns whether the version is published (then the language joins the published briefing).
  */
 export async function approveLanguage(db: Db, actor: BriefingActor, versionId: string, lang: string): Promise<{ published: boolean }> {
-  requireRole(actor, TRANSLATING);
+  requireRole(actor, ROLES.translating);
   if (lang === SOURCE_LANGUAGE) throw new BriefingError(409, 'briefing.lang.source');
   return db.transaction(async (tx) => {
     const v = await loadVersion(tx, actor, versionId, true);
