@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # Quick start, first command: installs what is missing, prepares and seeds the database, starts the
-# local mail service, builds the app and serves it on http://localhost:3000 with the demo data.
+# local mail service and a job worker (outlook runs), builds the app and serves it on http://localhost:3000 with the demo data.
 # Safe to run again: data in .data/ is kept, a previous run's app and mail service are replaced.
 set -euo pipefail
 source "$(dirname "$0")/common.sh"
@@ -26,6 +26,7 @@ stop_pidfile() {
 # A previous run of this script is replaced; anything else on our ports is reported, not killed.
 stop_pidfile .data/app.pid
 stop_pidfile .data/mail.pid
+stop_pidfile .data/worker.pid
 port_in_use "$APP_PORT" && fail "port $APP_PORT is taken by another program; stop it or run with APP_PORT=<free port>"
 port_in_use "$SMTP_PORT" && fail "mail port $SMTP_PORT is taken by another program; stop it or run with SMTP_PORT=<free port>"
 
@@ -39,6 +40,10 @@ npx tsx --require ./scripts/server-process.cjs scripts/seed.ts
 say "Starting the local mail service on 127.0.0.1:$SMTP_PORT"
 setsid npx tsx --require ./scripts/server-process.cjs scripts/mail-server.ts >.data/mail.log 2>&1 </dev/null &
 echo $! >.data/mail.pid
+
+say "Starting a job worker (log: .data/worker.log)"
+setsid npx tsx --require ./scripts/server-process.cjs scripts/worker.ts --concurrency "${WORKER_CONCURRENCY:-1}" >.data/worker.log 2>&1 </dev/null &
+echo $! >.data/worker.pid
 
 say "Building the app (about a minute)"
 npm run --silent build >.data/build.log 2>&1 || fail "the build failed; see .data/build.log"
@@ -54,5 +59,6 @@ cat <<MSG
 
 Thawline is running on $APP_URL (log: .data/app.log).
 Mail sent by the app is kept by the local mail service: read it at $APP_URL/dev/inbox
+Outlooks run in the job worker (log: .data/worker.log); more workers: npm run worker, on any machine.
 Stop everything: npm run stop     (the database alone: npm run db:stop)
 MSG

@@ -1,9 +1,9 @@
 #!/usr/bin/env bash
-# Stops what scripts/start.sh started: the app, the mail service and the database. Data stays in .data/.
+# Stops what scripts/start.sh started: the app, the job worker, the mail service and the database. Data stays in .data/.
 set -euo pipefail
 source "$(dirname "$0")/common.sh"
 cd "$ROOT"
-for name in app mail; do
+for name in app worker mail; do
   f=".data/$name.pid"
   if [ -f "$f" ]; then
     pid="$(cat "$f")"

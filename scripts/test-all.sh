@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # Quick start, second command: every test. Type-check, lint, unit tests (engine included), then
-# integration and end-to-end tests against a MariaDB instance, a mail service and an app build of
+# integration and end-to-end tests against a MariaDB instance, a mail service, a job worker and an app build of
 # their own (own ports, own data directory, throw-away database), so the demo data is never touched
 # and a running demo keeps running. Ends with one summary line.
 set -uo pipefail
@@ -36,6 +36,7 @@ export DEV_INBOX=1 NEXT_DIST_DIR=.next-test
 
 cleanup() {
   [ -n "${APP_PID:-}" ] && kill -- "-$APP_PID" 2>/dev/null
+  [ -n "${WORKER_PID:-}" ] && kill -- "-$WORKER_PID" 2>/dev/null
   [ -n "${MAIL_PID:-}" ] && kill -- "-$MAIL_PID" 2>/dev/null
   bash scripts/db.sh sql -e "DROP DATABASE IF EXISTS \`$DB_NAME\`" >/dev/null 2>&1
   # Throw-away databases of integration tests that were interrupted.
@@ -54,6 +55,10 @@ if [ "$services_ok" = 1 ]; then
 fi
 setsid npx tsx --require ./scripts/server-process.cjs scripts/mail-server.ts >"$TMPDIR/test-mail.log" 2>&1 </dev/null &
 MAIL_PID=$!
+if [ "$services_ok" = 1 ]; then
+  setsid npx tsx --require ./scripts/server-process.cjs scripts/worker.ts >"$TMPDIR/test-worker.log" 2>&1 </dev/null &
+  WORKER_PID=$!
+fi
 say "Building the app for the tests"
 if [ "$services_ok" = 1 ] && npm run --silent build >"$TMPDIR/test-build.log" 2>&1; then
   setsid npx next start -p "$APP_PORT" >"$TMPDIR/test-app.log" 2>&1 </dev/null &

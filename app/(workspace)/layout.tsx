@@ -4,6 +4,7 @@ import { getTranslations } from 'next-intl/server';
 import { LanguageSwitcher } from '@/components/auth/language-switcher';
 import { OrganisationSwitcher } from '@/components/auth/organisation-switcher';
 import { SignOutButton } from '@/components/auth/sign-out-button';
+import { QueryProvider } from '@/components/providers/query-provider';
 import { hasRole, requireActor, ROLES } from '@/lib/data/session';
 
 /**
@@ -40,7 +41,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
           </div>
         </div>
       </header>
-      {children}
+      <QueryProvider>{children}</QueryProvider>
     </div>
   );
 }

@@ -14,3 +14,4 @@ export * from './briefings';
 export * from './briefing-versions';
 export * from './briefing-languages';
 export * from './briefing-strings';
+export * from './jobs';

@@ -2,21 +2,20 @@
 
 import { failure, validatedAction, type ActionResult } from '@/lib/server/validated-action';
 import { runOutlookSchema } from '@/lib/schemas/outlook';
-import { OutlookInputRefused, runOutlook } from '@/lib/data/outlooks';
+import type { JobDto } from '@/lib/schemas/api/dto';
+import { OutlookInputRefused, requestOutlook } from '@/lib/data/outlooks';
 
 /**
- * Runs the outlook of a ground profile's current version. Planners and admins only: the data layer
- * checks the role (403) and the organisation (404). The client refreshes the page afterwards, so
- * nothing here re-renders a page.
+ * Queues the outlook of a ground profile's current version for the chosen scenarios and horizons
+ * (planners and admins: the data layer checks the role, 403, and the organisation, 404) and answers
+ * at once with the job; the page follows it through GET /api/v1/jobs/{id}. A worker process runs it.
  */
-export const runOutlookAction = validatedAction(runOutlookSchema, async ({ communitySlug, profileSlug }): Promise<ActionResult<{ id: string; reused: boolean }>> => {
-  let outcome: Awaited<ReturnType<typeof runOutlook>>;
+export const runOutlookAction = validatedAction(runOutlookSchema, async ({ communitySlug, profileSlug, scenarios, horizons }): Promise<ActionResult<{ job: JobDto }>> => {
   try {
-    outcome = await runOutlook(communitySlug, profileSlug);
+    const job = await requestOutlook(communitySlug, profileSlug, { scenarios, horizons });
+    return { ok: true, data: { job } };
   } catch (e) {
     if (e instanceof OutlookInputRefused) return failure(`The ground profile's inputs do not pass the engine's checks: ${e.message}`);
     throw e;
   }
-  const { id, reused } = outcome;
-  return { ok: true, message: reused ? 'The stored outlook of these inputs is shown.' : 'The outlook is ready.', data: { id, reused } };
 });

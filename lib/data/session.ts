@@ -8,6 +8,7 @@ import { memberships, organisations, roles, sessions, users, type Role } from '@
 import { auth } from '@/lib/auth/auth';
 import { safeReturnPath } from '@/lib/schemas/auth';
 import { hasRole, ROLES } from '@/lib/schemas/roles';
+import { ApiError } from '@/lib/server/api-error';
 
 /**
  * THE authorization core. Every data module asks here who is acting, in which organisation and with
@@ -180,6 +181,25 @@ export async function actorForRoute(allowed?: readonly Role[]): Promise<Actor | 
   }
   if (allowed && !hasRole(actor, allowed)) return jsonError(403, accessMessages[403]);
   return actor;
+}
+
+/**
+ * For v1 API data functions: the actor, or an ApiError (401 not signed in, 403 no membership or role
+ * not allowed) that the route frame answers as JSON.
+ */
+export async function apiActor(allowed?: readonly Role[]): Promise<Actor> {
+  const actor = await getActor();
+  if (!actor) {
+    if (await getSignedInUser()) throw new ApiError(403, 'no_membership', 'You are signed in but no longer belong to an organisation.');
+    throw new ApiError(401, 'unauthenticated', accessMessages[401]);
+  }
+  if (allowed && !hasRole(actor, allowed)) throw new ApiError(403, 'forbidden', accessMessages[403]);
+  return actor;
+}
+
+/** For v1 API data functions: an ApiError 404 unless the thing belongs to the actor's organisation. */
+export function apiOwnOr404(organisationId: string | null | undefined, actor: Actor, what = 'Not found.'): asserts organisationId is string {
+  if (!isOwn(organisationId, actor)) throw new ApiError(404, 'not_found', what);
 }
 
 /** For route handlers: a 404 Response unless the thing belongs to the actor's organisation, else null. */

@@ -3,7 +3,7 @@
  * schema); client components must not import this file.
  */
 import { canonicalSha256, assessInputSchema, type AssessInput } from '@/lib/engine';
-import { OUTLOOK_HORIZONS, OUTLOOK_SCENARIOS } from './scenarios';
+import { OUTLOOK_HORIZONS, OUTLOOK_SCENARIOS, orderScenarios } from './scenarios';
 
 /** Every scenario (low → high) and the three planning horizons, on one site document. */
 export function outlookInput(site: unknown): AssessInput {
@@ -17,4 +17,13 @@ export function outlookInput(site: unknown): AssessInput {
  */
 export function outlookInputSha256(input: AssessInput): string {
   return canonicalSha256(assessInputSchema.parse(input));
+}
+
+/** The engine input of a planner's choice of scenarios and horizons, in the fixed orders. */
+export function outlookInputFor(site: unknown, choice: { scenarios: readonly string[]; horizons: readonly number[] }): AssessInput {
+  return {
+    site: site as AssessInput['site'],
+    scenarios: orderScenarios(choice.scenarios) as AssessInput['scenarios'],
+    horizons: [...new Set(choice.horizons)].sort((a, b) => a - b),
+  };
 }

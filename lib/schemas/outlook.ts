@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { outlookRequestBody } from './api/dto';
 
 /** Slugs as the community and profile pages use them (lowercase letters, digits, hyphens). */
 const slug = (what: string) =>
@@ -8,6 +9,10 @@ const slug = (what: string) =>
     .max(80, `The ${what} is too long.`)
     .regex(/^[A-Za-z0-9-]+$/, `The ${what} has letters, digits and hyphens only.`);
 
-/** Input of the "run the outlook" action. */
-export const runOutlookSchema = z.strictObject({ communitySlug: slug('community'), profileSlug: slug('ground profile') });
+/** Input of the "run the outlook" action: the profile, and the scenarios and horizons chosen. */
+export const runOutlookSchema = z.strictObject({
+  communitySlug: slug('community'),
+  profileSlug: slug('ground profile'),
+  ...outlookRequestBody.shape,
+});
 export type RunOutlookInput = z.input<typeof runOutlookSchema>;

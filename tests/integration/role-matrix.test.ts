@@ -16,7 +16,7 @@ import path from 'node:path';
 import nodemailer from 'nodemailer';
 import { and, asc, eq, inArray, like, ne } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { communities, groundProfiles, invitations, memberships, organisations, users } from '@/db/schema';
+import { communities, groundProfiles, groundProfileVersions, invitations, jobs, memberships, organisations, outlooks, users } from '@/db/schema';
 import { listMessages } from '@/lib/mail/store';
 import { AppClient, ensureAppRunning, BASE_URL, forgedToken, MAIL_STORE_DIR, testDb, uniqueAddress, type Reply } from './helpers/app-client';
 
@@ -129,8 +129,8 @@ function discover(): { keys: string[]; inlineActions: string[] } {
 
 const { pool, db } = testDb();
 const fx = {
-  own: { organisationId: '', communitySlug: '', profileSlug: '', councilMembershipId: '', tempMembershipId: '', invitationId: '' },
-  other: { organisationId: '', communitySlug: '', profileSlug: '', membershipId: '', membershipRole: '' as string, invitationId: '' },
+  own: { organisationId: '', communitySlug: '', profileSlug: '', profileId: '', jobId: '', outlookId: '', councilMembershipId: '', tempMembershipId: '', invitationId: '' },
+  other: { organisationId: '', communitySlug: '', profileSlug: '', profileId: '', jobId: '', outlookId: '', membershipId: '', membershipRole: '' as string, invitationId: '' },
   messageId: '',
   tempUserId: '',
   prefix: `matrix-${Date.now().toString(36)}`,
@@ -151,9 +151,21 @@ async function firstCommunity(organisationId: string) {
     .orderBy(asc(communities.slug))
     .limit(1);
   if (!c) throw new Error(`organisation ${organisationId} has no community in the seed`);
-  const [p] = await db.select({ slug: groundProfiles.slug }).from(groundProfiles).where(eq(groundProfiles.communityId, c.id)).orderBy(asc(groundProfiles.slug)).limit(1);
+  const [p] = await db
+    .select({ slug: groundProfiles.slug, id: groundProfiles.id, versionId: groundProfileVersions.id })
+    .from(groundProfiles)
+    .innerJoin(groundProfileVersions, and(eq(groundProfileVersions.profileId, groundProfiles.id), eq(groundProfileVersions.version, groundProfiles.currentVersion)))
+    .where(eq(groundProfiles.communityId, c.id))
+    .orderBy(asc(groundProfiles.slug))
+    .limit(1);
   if (!p) throw new Error(`community ${c.slug} has no ground profile in the seed`);
-  return { communitySlug: c.slug, profileSlug: p.slug };
+  // A finished job and a stored outlook of the organisation's own, for the v1 reads by id.
+  const jobId = crypto.randomUUID();
+  await db.insert(jobs).values({ id: jobId, kind: 'matrix-probe', organisationId, payload: {}, state: 'succeeded', progress: 1, result: {} });
+  const outlookId = crypto.randomUUID();
+  const hash = crypto.randomUUID().replace(/-/g, '').padEnd(64, '0');
+  await db.insert(outlooks).values({ id: outlookId, profileVersionId: p.versionId, organisationId, scenarios: ['SSP2-4.5'], horizons: [2050], inputSha256: hash, engineVersion: 'matrix-probe', result: { provenance: { input_sha256: hash, engine_version: 'matrix-probe' } } });
+  return { communitySlug: c.slug, profileSlug: p.slug, profileId: p.id, jobId, outlookId };
 }
 
 beforeAll(async () => {
@@ -210,6 +222,8 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
+  await db.delete(jobs).where(eq(jobs.kind, 'matrix-probe'));
+  await db.delete(outlooks).where(eq(outlooks.engineVersion, 'matrix-probe'));
   await db.delete(invitations).where(like(invitations.email, `${fx.prefix}%`));
   if (fx.tempUserId) await db.delete(users).where(eq(users.id, fx.tempUserId));
   await pool.end();
@@ -228,7 +242,28 @@ function pagePath(pattern: string, v: Variant): string {
     .replace('[id]', fx.messageId);
 }
 
-const routeRequests: Record<string, () => { path: string; init?: RequestInit }> = {
+/** One scenario and horizon per person that no other row asks for, so each POST queues a job of its own. */
+const OUTLOOK_CHOICE: Record<Column, { scenarios: string[]; horizons: number[] }> = {
+  anonymous: { scenarios: ['SSP1-1.9'], horizons: [2090] },
+  admin: { scenarios: ['SSP1-1.9'], horizons: [2090] },
+  planner: { scenarios: ['SSP1-2.6'], horizons: [2090] },
+  translator: { scenarios: ['SSP3-7.0'], horizons: [2090] },
+  council: { scenarios: ['SSP5-8.5'], horizons: [2090] },
+};
+
+const f = (v: Variant) => (v === 'own' ? fx.own : fx.other);
+
+const routeRequests: Record<string, (v: Variant, col: Column) => { path: string; init?: RequestInit }> = {
+  'route GET /api/v1/openapi.json': () => ({ path: '/api/v1/openapi.json' }),
+  'route GET /api/v1/communities': () => ({ path: '/api/v1/communities' }),
+  'route GET /api/v1/communities/[slug]': (v) => ({ path: `/api/v1/communities/${f(v).communitySlug}` }),
+  'route GET /api/v1/profiles/[id]': (v) => ({ path: `/api/v1/profiles/${f(v).profileId}` }),
+  'route POST /api/v1/profiles/[id]/outlooks': (v, col) => ({
+    path: `/api/v1/profiles/${f(v).profileId}/outlooks`,
+    init: { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(OUTLOOK_CHOICE[col]) },
+  }),
+  'route GET /api/v1/jobs/[id]': (v) => ({ path: `/api/v1/jobs/${f(v).jobId}` }),
+  'route GET /api/v1/outlooks/[id]': (v) => ({ path: `/api/v1/outlooks/${f(v).outlookId}` }),
   'route GET /api/health': () => ({ path: '/api/health' }),
   'route GET /api/auth/[...nextauth]': () => ({ path: '/api/auth/session' }),
   'route POST /api/auth/[...nextauth]': () => ({
@@ -245,7 +280,7 @@ const actionArgs: Record<string, (v: Variant) => unknown[]> = {
   'action lib/actions/preferences.ts#switchOrganisationAction': (v) => [{ organisationId: v === 'own' ? fx.own.organisationId : fx.other.organisationId }],
   'action lib/actions/preferences.ts#setLocaleAction': () => [{ locale: 'en' }],
   'action lib/actions/outlooks.ts#runOutlookAction': (v) => [
-    { communitySlug: (v === 'own' ? fx.own : fx.other).communitySlug, profileSlug: (v === 'own' ? fx.own : fx.other).profileSlug },
+    { communitySlug: (v === 'own' ? fx.own : fx.other).communitySlug, profileSlug: (v === 'own' ? fx.own : fx.other).profileSlug, scenarios: ['SSP2-4.5'], horizons: [2030] },
   ],
   'action lib/actions/members.ts#inviteMember': () => [{ email: uniqueAddress(`${fx.prefix}-invitee`), role: 'council' }],
   'action lib/actions/members.ts#changeRole': (v) => [{ membershipId: v === 'own' ? fx.own.councilMembershipId : fx.other.membershipId, role: 'council' }],
@@ -269,7 +304,7 @@ async function exercise(row: Row, col: Column, v: Variant): Promise<Reply> {
   if (kind === 'route') {
     const make = routeRequests[row.key];
     if (!make) throw new Error(`no request defined for ${row.key} in role-matrix.test.ts`);
-    const { path: p, init } = make();
+    const { path: p, init } = make(v, col);
     return client.request(p, init);
   }
   const args = actionArgs[row.key];

@@ -70,3 +70,15 @@ export async function storeOutlook(input: StoreOutlookInput, ctx: OutlookContext
   const stored = await findOutlookByKey(key, tx, { lock: true });
   return { id: stored!.id, reused: stored!.id !== id };
 }
+
+/** The site document of a profile version, or null unless it belongs to the organisation. */
+export async function profileVersionSite(conn: Db | Tx, profileVersionId: string, organisationId: string): Promise<Record<string, unknown> | null> {
+  const [row] = await conn
+    .select({ organisationId: communities.organisationId, site: groundProfileVersions.site })
+    .from(groundProfileVersions)
+    .innerJoin(groundProfiles, eq(groundProfiles.id, groundProfileVersions.profileId))
+    .innerJoin(communities, eq(communities.id, groundProfiles.communityId))
+    .where(eq(groundProfileVersions.id, profileVersionId))
+    .limit(1);
+  return row && row.organisationId === organisationId ? (row.site as Record<string, unknown>) : null;
+}

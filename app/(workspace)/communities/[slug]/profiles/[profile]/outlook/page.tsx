@@ -15,7 +15,7 @@ import { ProvenanceSection } from '@/components/outlook/provenance-section';
 import { RatingSection } from '@/components/outlook/rating-section';
 import { ReasonsSection } from '@/components/outlook/reasons-section';
 import { ResultsTable } from '@/components/outlook/results-table';
-import { RunOutlookButton } from '@/components/outlook/run-outlook-button';
+import { RunOutlookPanel } from '@/components/outlook/run-outlook-panel';
 import { SummarySection } from '@/components/outlook/summary-section';
 
 type T = Awaited<ReturnType<typeof getTranslations<'outlook'>>>;
@@ -30,8 +30,9 @@ export async function generateMetadata() {
  * runs before anything streams, so another organisation's profile answers 404; only the stored
  * outlook below it is read inside <Suspense> (no loading.tsx: its boundary would stream 200 first).
  */
-export default async function OutlookPage({ params }: { params: Promise<{ slug: string; profile: string }> }) {
+export default async function OutlookPage({ params, searchParams }: { params: Promise<{ slug: string; profile: string }>; searchParams: Promise<{ outlook?: string | string[] }> }) {
   const { slug, profile } = await params;
+  const asked = (await searchParams).outlook;
   const p = await getGroundProfile(slug, profile);
   const actor = await requireActor();
   const canRun = hasRole(actor, ROLES.planning);
@@ -52,7 +53,7 @@ export default async function OutlookPage({ params }: { params: Promise<{ slug: 
       </header>
       <Caution />
       <Suspense fallback={<OutlookSkeleton />}>
-        <OutlookBody communitySlug={p.community.slug} profileSlug={p.slug} currentVersion={p.currentVersion} canRun={canRun} />
+        <OutlookBody communitySlug={p.community.slug} profileSlug={p.slug} currentVersion={p.currentVersion} canRun={canRun} outlookId={typeof asked === 'string' ? asked : undefined} />
       </Suspense>
     </main>
   );
@@ -72,25 +73,31 @@ function OutlookSkeleton() {
   );
 }
 
-async function OutlookBody({ communitySlug, profileSlug, currentVersion, canRun }: { communitySlug: string; profileSlug: string; currentVersion: number; canRun: boolean }) {
-  const outlook = await getOutlook(communitySlug, profileSlug);
+async function OutlookBody({ communitySlug, profileSlug, currentVersion, canRun, outlookId }: { communitySlug: string; profileSlug: string; currentVersion: number; canRun: boolean; outlookId?: string }) {
+  const outlook = await getOutlook(communitySlug, profileSlug, outlookId);
   const t = await getTranslations('outlook');
   const locale = await getLocale();
-  const help = t('run.help', { version: currentVersion });
+  const panel = (again: boolean) => <RunOutlookPanel communitySlug={communitySlug} profileSlug={profileSlug} again={again} version={currentVersion} />;
 
   if (!outlook) {
     return (
       <section aria-labelledby="run" className="rounded border border-snow-200 bg-ice-raised px-4 py-4">
         <h2 id="run" className="font-bold">{t('none')}</h2>
-        <div className="mt-3">{canRun ? <RunOutlookButton communitySlug={communitySlug} profileSlug={profileSlug} again={false} help={help} /> : <p className="text-sm">{t('noneReader')}</p>}</div>
+        <div className="mt-3">{canRun ? panel(false) : <p className="text-sm">{t('noneReader')}</p>}</div>
       </section>
     );
   }
 
   return (
     <>
-      {outlook.stale.length > 0 ? <StaleNotice outlook={outlook} t={t} canRun={canRun} run={<RunOutlookButton communitySlug={communitySlug} profileSlug={profileSlug} again help={help} />} /> : null}
+      {outlook.stale.length > 0 ? <StaleNotice outlook={outlook} t={t} canRun={canRun} run={panel(true)} /> : null}
       {outlook.result ? <OutlookResultView outlook={outlook} result={outlook.result} locale={locale} /> : <p className="rounded bg-rust-pale px-4 py-3">{t('unreadable')}</p>}
+      {canRun && outlook.stale.length === 0 ? (
+        <details className="rounded border border-snow-200 bg-ice-raised px-4 py-3">
+          <summary className="cursor-pointer font-bold">{t('run.other')}</summary>
+          <div className="mt-3">{panel(true)}</div>
+        </details>
+      ) : null}
     </>
   );
 }
