@@ -39,6 +39,8 @@ const server = new SMTPServer({
           text: parsed.text ?? '',
           html: typeof parsed.html === 'string' ? parsed.html : null,
           attachments: parsed.attachments.map((att) => ({ filename: att.filename ?? 'attachment', contentType: att.contentType, size: att.size })),
+          messageId: parsed.messageId ?? null,
+          listHeaders: Object.fromEntries(['list-unsubscribe', 'list-unsubscribe-post'].flatMap((h) => (parsed.headers.has(h) ? [[h, String(parsed.headers.get(h))]] : []))),
         });
         callback();
       })

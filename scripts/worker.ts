@@ -9,7 +9,7 @@
 import os from 'node:os';
 import { connectDb } from '../db/connect';
 import { assessWorkerPool, closeAssessPool } from '../lib/engine/assess-pool';
-import { jobHandlers } from '../lib/jobs/registry';
+import { jobLanes } from '../lib/jobs/registry';
 import { startWorker } from '../lib/jobs/runner';
 import { dbConfig } from '../lib/server/env';
 
@@ -28,22 +28,28 @@ function option(name: string, fallback: number, min: number, max: number): numbe
 const concurrency = option('concurrency', 1, 1, 64);
 const leaseMs = option('lease-ms', 30_000, 500, 600_000);
 const threads = option('engine-threads', 2, 0, 16);
-const { pool, db } = connectDb(dbConfig(), concurrency + 2);
+const { pool, db } = connectDb(dbConfig(), concurrency + 4);
 const workerId = `${os.hostname()}:${process.pid}`;
 const log = (line: string) => console.log(`${new Date().toISOString()} worker ${workerId}: ${line}`);
 
-const worker = startWorker({ db, workerId, concurrency, leaseMs, handlers: jobHandlers(db, { workers: assessWorkerPool, workerThreads: threads }), log });
-log(`started: ${concurrency} slot(s), lease ${leaseMs} ms`);
+const lanes = jobLanes(db, { workers: assessWorkerPool, workerThreads: threads });
+// Heavy jobs (outlooks) take `concurrency` slots; e-mail has two slots of its own, so a message never
+// waits behind an engine run.
+const workers = [
+  startWorker({ db, workerId: `${workerId}/heavy`, concurrency, leaseMs, handlers: lanes.heavy, log }),
+  startWorker({ db, workerId: `${workerId}/light`, concurrency: 2, leaseMs, handlers: lanes.light, log }),
+];
+log(`started: ${concurrency} slot(s) for ${Object.keys(lanes.heavy).join(', ')}, 2 for ${Object.keys(lanes.light).join(', ')}; lease ${leaseMs} ms`);
 
 let stopping = false;
 async function shutdown(signal: string) {
   if (stopping) return;
   stopping = true;
   log(`${signal}: finishing running jobs`);
-  await worker.stop();
+  await Promise.all(workers.map((w) => w.stop()));
   await closeAssessPool();
   await pool.end();
-  log(`stopped after ${worker.finished} job(s)`);
+  log(`stopped after ${workers.reduce((n, w) => n + w.finished, 0)} job(s)`);
   process.exit(0);
 }
 process.on('SIGTERM', () => void shutdown('SIGTERM'));

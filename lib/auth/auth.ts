@@ -4,11 +4,11 @@ import Credentials from 'next-auth/providers/credentials';
 import Nodemailer from 'next-auth/providers/nodemailer';
 import { DrizzleAdapter } from '@auth/drizzle-adapter';
 import { randomBytes } from 'node:crypto';
-import { and, eq, lt } from 'drizzle-orm';
+import { and, eq, lt, max } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { accounts, sessions, users, verificationTokens } from '@/db/schema';
 import { env } from '@/lib/server/env';
-import { sendMail } from '@/lib/mail/send';
+import { queueMail } from '@/lib/mail/outbox';
 import { verifyPassword } from '@/lib/auth/passwords';
 import { clientIp, consume, isBlocked, reward } from '@/lib/server/rate-limit';
 import { emailSchema, invitationTokenSchema, passwordSignInSchema } from '@/lib/schemas/auth';
@@ -113,7 +113,12 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
         // Auth.js builds the link from the request's Host header; a forged Host would mail a working
         // token pointing at another site. Links always point at the configured APP_URL instead.
         const url = onAppOrigin(requestUrl);
-        await sendMail({
+        // A new link ends the older ones of the same address (Auth.js stored this one just before).
+        const [newest] = await db.select({ expires: max(verificationTokens.expires) }).from(verificationTokens).where(eq(verificationTokens.identifier, identifier));
+        if (newest?.expires) await db.delete(verificationTokens).where(and(eq(verificationTokens.identifier, identifier), lt(verificationTokens.expires, newest.expires)));
+        // Queued (the outbox), not sent here: every address gets its answer in the same time, and a
+        // mail service that is down delays the link instead of losing it.
+        await queueMail(db, {
           to: identifier,
           subject: 'Your Thawline sign-in link',
           text: [

@@ -4,7 +4,7 @@ import { and, asc, eq, gt, isNull } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { invitations, memberships, organisations, users, type Role } from '@/db/schema';
 import { env } from '@/lib/server/env';
-import { sendMail } from '@/lib/mail/send';
+import { queueMail } from '@/lib/mail/outbox';
 import { consume } from '@/lib/server/rate-limit';
 import { recordAuditEvent } from './core/audit-log';
 import { hashToken, INVITATION_MAX_AGE_MS } from './core/invitation-acceptance';
@@ -51,6 +51,10 @@ export async function createInvitation(input: { email: string; role: Role }): Pr
 
   const token = randomBytes(32).toString('base64url');
   const expiresAt = new Date(Date.now() + INVITATION_MAX_AGE_MS);
+  // The configured APP_URL, never the request's Host header (a forged Host must not receive tokens).
+  const url = `${env.APP_URL.replace(/\/$/, '')}/invite/${token}`;
+  // The invitation and its e-mail are stored together (the outbox): a mail service that is down
+  // delays the message, it never loses it.
   await db.transaction(async (tx) => {
     await tx
       .update(invitations)
@@ -58,22 +62,24 @@ export async function createInvitation(input: { email: string; role: Role }): Pr
       .where(and(eq(invitations.organisationId, actor.organisationId), eq(invitations.email, input.email), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)));
     await tx.insert(invitations).values({ organisationId: actor.organisationId, email: input.email, role: input.role, tokenSha256: hashToken(token), invitedByUserId: actor.userId, expiresAt });
     await recordAuditEvent({ event: 'invitation.created', organisationId: actor.organisationId, actorUserId: actor.userId, subject: input.email, detail: { role: input.role } }, tx);
-  });
-  // The configured APP_URL, never the request's Host header (a forged Host must not receive tokens).
-  const url = `${env.APP_URL.replace(/\/$/, '')}/invite/${token}`;
-  await sendMail({
-    to: input.email,
-    subject: `You are invited to ${actor.organisationName} on Thawline`,
-    text: [
-      'Hello,',
-      '',
-      `${actor.name ?? actor.email} invites you to join ${actor.organisationName} on Thawline as ${input.role}.`,
-      '',
-      'Open this link to accept and sign in:',
-      url,
-      '',
-      'The link works once and expires in 7 days. If you did not expect this, you can ignore this message.',
-    ].join('\n'),
+    await queueMail(
+      tx,
+      {
+        to: input.email,
+        subject: `You are invited to ${actor.organisationName} on Thawline`,
+        text: [
+          'Hello,',
+          '',
+          `${actor.name ?? actor.email} invites you to join ${actor.organisationName} on Thawline as ${input.role}.`,
+          '',
+          'Open this link to accept and sign in:',
+          url,
+          '',
+          'The link works once and expires in 7 days. If you did not expect this, you can ignore this message.',
+        ].join('\n'),
+      },
+      { organisationId: actor.organisationId },
+    );
   });
   return { ok: true };
 }

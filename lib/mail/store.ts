@@ -15,6 +15,10 @@ export interface StoredMessage {
   text: string;
   html: string | null;
   attachments: { filename: string; contentType: string; size: number }[];
+  /** The Message-ID header (null in messages stored before it was kept). */
+  messageId?: string | null;
+  /** Headers a reader may need to check (List-Unsubscribe, List-Unsubscribe-Post). */
+  listHeaders?: Record<string, string>;
 }
 
 export async function saveMessage(dir: string, message: StoredMessage): Promise<void> {

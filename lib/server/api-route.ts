@@ -19,9 +19,10 @@ type Params = Record<string, string | string[] | undefined>;
 type Handler<P> = (request: Request, params: P) => Promise<Response>;
 
 export function apiRoute<S extends z.ZodType<Params>>(paramsSchema: S, handler: Handler<z.output<S>>) {
-  return async (request: Request, context: { params: Promise<Params> }): Promise<Response> => {
+  return async (request: Request, context?: { params?: Promise<Params> }): Promise<Response> => {
     try {
-      const parsed = paramsSchema.safeParse(await context.params);
+      // Routes without dynamic segments get no params.
+      const parsed = paramsSchema.safeParse((await context?.params) ?? {});
       if (!parsed.success) throw new ApiError(404, 'not_found', 'Not found.');
       return await handler(request, parsed.data);
     } catch (e) {

@@ -6,7 +6,6 @@
  * lost cannot overwrite the new holder; and a worker process killed with SIGKILL in the middle of an
  * outlook leaves it to another worker process, which finishes it.
  */
-import { spawn, type ChildProcess } from 'node:child_process';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { and, eq, sql } from 'drizzle-orm';
 import { seedDemo } from '@/db/seed';
@@ -14,6 +13,7 @@ import { communities, groundProfiles, groundProfileVersions, jobs, organisations
 import { claimJob, completeJob, enqueueJob, failJob, getJob, PermanentJobError, renewLease, retryDelayMs } from '@/lib/jobs/queue';
 import { OUTLOOK_JOB } from '@/lib/jobs/kinds/outlook';
 import { createThrowawayDb, type ThrowawayDb } from './throwaway-db';
+import { startWorkerProcess, until } from './helpers/worker-process';
 
 let t: ThrowawayDb;
 let orgId = '';
@@ -114,28 +114,6 @@ describe('job queue', () => {
 
 // ---- worker processes ----------------------------------------------------------------------------
 
-function startWorkerProcess(leaseMs: number): { child: ChildProcess; log: () => string } {
-  let out = '';
-  const child = spawn('npx', ['tsx', '--require', './scripts/server-process.cjs', 'scripts/worker.ts', '--lease-ms', String(leaseMs), '--engine-threads', '1'], {
-    env: { ...process.env, DB_NAME: t.name },
-    stdio: ['ignore', 'pipe', 'pipe'],
-    detached: true,
-  });
-  child.stdout!.on('data', (d) => (out += d));
-  child.stderr!.on('data', (d) => (out += d));
-  return { child, log: () => out };
-}
-
-async function until<T>(what: string, fn: () => Promise<T | null | undefined | false>, timeoutMs: number): Promise<T> {
-  const end = Date.now() + timeoutMs;
-  for (;;) {
-    const v = await fn();
-    if (v) return v;
-    if (Date.now() > end) throw new Error(`timed out waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 200));
-  }
-}
-
 describe('worker process', () => {
   it('finishes an outlook whose first worker was killed with SIGKILL midway', async () => {
     const [version] = await t.db
@@ -147,15 +125,15 @@ describe('worker process', () => {
       .limit(1);
     const { job } = await enqueueJob(t.db, { kind: OUTLOOK_JOB, organisationId: orgId, payload: { profileVersionId: version!.id, scenarios: ['SSP2-4.5', 'SSP5-8.5'], horizons: [2050] } });
 
-    const first = startWorkerProcess(1500);
+    const first = startWorkerProcess(t.name);
     try {
       await until('the first worker to start the outlook', async () => ((await getJob(t.db, job.id))?.state === 'running' ? true : null), 60_000);
-      process.kill(-first.child.pid!, 'SIGKILL');
+      first.kill('SIGKILL');
     } catch (e) {
-      process.kill(-first.child.pid!, 'SIGKILL');
+      first.kill('SIGKILL');
       throw new Error(`${(e as Error).message}\n${first.log()}`);
     }
-    const second = startWorkerProcess(1500);
+    const second = startWorkerProcess(t.name);
     try {
       const done = await until('the second worker to finish it', async () => {
         const j = await getJob(t.db, job.id);
@@ -167,7 +145,7 @@ describe('worker process', () => {
       const [stored] = await t.db.select({ id: outlooks.id }).from(outlooks).where(eq(outlooks.id, done.result!.outlookId as string));
       expect(stored).toBeDefined();
     } finally {
-      process.kill(-second.child.pid!, 'SIGTERM');
+      second.kill();
     }
   }, 180_000);
 });
